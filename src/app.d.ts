@@ -1,0 +1,23 @@
+import type { Role } from '$lib/server/db/schema';
+
+declare global {
+	namespace App {
+		interface Error {
+			message: string;
+		}
+		interface Locals {
+			user: { id: string; email: string; name: string; role: Role } | null;
+		}
+		interface PageData {
+			user?: { name: string; email: string; role: Role } | null;
+		}
+	}
+}
+
+declare module '@auth/core/types' {
+	interface Session {
+		user: { id: string; email: string; name?: string | null };
+	}
+}
+
+export {};

@@ -1,0 +1,338 @@
+import {
+	boolean,
+	date,
+	datetime,
+	decimal,
+	index,
+	int,
+	json,
+	mysqlEnum,
+	mysqlTable,
+	primaryKey,
+	text,
+	timestamp,
+	varchar
+} from 'drizzle-orm/mysql-core';
+import { sql } from 'drizzle-orm';
+import { ORDER_STAGES } from '../../orders/stages';
+
+// Money is integer minor units (cents); lengths are decimal centimetres with one fixed decimal
+// (a millimetre), never floats: the same figures must come back out that went in.
+const cm = (name: string, precision = 6) => decimal(name, { precision, scale: 1, mode: 'number' });
+const created = () =>
+	timestamp('created_at', { fsp: 3 })
+		.notNull()
+		.default(sql`CURRENT_TIMESTAMP(3)`);
+const updated = () =>
+	timestamp('updated_at', { fsp: 3 })
+		.notNull()
+		.default(sql`CURRENT_TIMESTAMP(3)`)
+		.$onUpdate(() => new Date());
+
+export const ROLES = ['shopper', 'cutter', 'owner'] as const;
+export type Role = (typeof ROLES)[number];
+
+// Auth.js tables keep the names and columns its Drizzle adapter expects; our own columns ride along.
+export const users = mysqlTable('user', {
+	id: varchar('id', { length: 255 })
+		.primaryKey()
+		.$defaultFn(() => crypto.randomUUID()),
+	name: varchar('name', { length: 255 }),
+	email: varchar('email', { length: 255 }).unique(),
+	emailVerified: timestamp('emailVerified', { mode: 'date', fsp: 3 }),
+	image: varchar('image', { length: 255 }),
+	role: mysqlEnum('role', ROLES).notNull().default('shopper'),
+	passwordHash: varchar('password_hash', { length: 255 }),
+	disabledAt: timestamp('disabled_at', { fsp: 3 }),
+	createdAt: created(),
+	updatedAt: updated()
+});
+
+export const accounts = mysqlTable(
+	'account',
+	{
+		userId: varchar('userId', { length: 255 })
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		type: varchar('type', { length: 255 }).$type<'email' | 'oauth' | 'oidc' | 'webauthn'>().notNull(),
+		provider: varchar('provider', { length: 255 }).notNull(),
+		providerAccountId: varchar('providerAccountId', { length: 255 }).notNull(),
+		refresh_token: varchar('refresh_token', { length: 255 }),
+		access_token: varchar('access_token', { length: 255 }),
+		expires_at: int('expires_at'),
+		token_type: varchar('token_type', { length: 255 }),
+		scope: varchar('scope', { length: 255 }),
+		id_token: varchar('id_token', { length: 2048 }),
+		session_state: varchar('session_state', { length: 255 })
+	},
+	(t) => [primaryKey({ columns: [t.provider, t.providerAccountId] }), index('account_user_idx').on(t.userId)]
+);
+
+export const sessions = mysqlTable(
+	'session',
+	{
+		sessionToken: varchar('sessionToken', { length: 255 }).primaryKey(),
+		userId: varchar('userId', { length: 255 })
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		expires: timestamp('expires', { mode: 'date' }).notNull()
+	},
+	(t) => [index('session_user_idx').on(t.userId)]
+);
+
+export const verificationTokens = mysqlTable(
+	'verificationToken',
+	{
+		identifier: varchar('identifier', { length: 255 }).notNull(),
+		token: varchar('token', { length: 255 }).notNull(),
+		expires: timestamp('expires', { mode: 'date' }).notNull()
+	},
+	(t) => [primaryKey({ columns: [t.identifier, t.token] })]
+);
+
+// Failed password sign-ins, kept in the database so every app server throttles the same e-mail alike.
+export const signInAttempts = mysqlTable(
+	'sign_in_attempt',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		email: varchar('email', { length: 255 }).notNull(),
+		succeeded: boolean('succeeded').notNull(),
+		createdAt: created()
+	},
+	(t) => [index('sign_in_attempt_email_idx').on(t.email, t.createdAt)]
+);
+
+// A shopper's saved set of measurements ("measure card"). Body measurements are personal data:
+// the consent time is kept, and the shopper can export or delete them.
+export const measurementProfiles = mysqlTable(
+	'measurement_profile',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		userId: varchar('user_id', { length: 255 })
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		name: varchar('name', { length: 80 }).notNull(),
+		waist: cm('waist_cm', 5).notNull(),
+		hip: cm('hip_cm', 5).notNull(),
+		length: cm('length_cm', 5).notNull(),
+		waistToHip: cm('waist_to_hip_cm', 5),
+		units: mysqlEnum('units', ['cm', 'in']).notNull().default('cm'),
+		consentAt: timestamp('consent_at', { fsp: 3 }).notNull(),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [index('measurement_profile_user_idx').on(t.userId)]
+);
+
+export const uploads = mysqlTable(
+	'upload',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		ownerId: varchar('owner_id', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		purpose: varchar('purpose', { length: 40 }).notNull(),
+		storageKey: varchar('storage_key', { length: 255 }).notNull().unique(),
+		mime: varchar('mime', { length: 80 }).notNull(),
+		bytes: int('bytes').notNull(),
+		width: int('width'),
+		height: int('height'),
+		createdAt: created()
+	},
+	(t) => [index('upload_owner_idx').on(t.ownerId)]
+);
+
+// Option prices and availability per style, in minor units; the drafting engine decides what each option does.
+export type StyleOptionPrices = Record<string, number>;
+
+export const styles = mysqlTable('style', {
+	id: int('id').autoincrement().primaryKey(),
+	slug: varchar('slug', { length: 80 }).notNull().unique(),
+	name: varchar('name', { length: 120 }).notNull(),
+	kind: varchar('kind', { length: 40 }).notNull(),
+	description: text('description').notNull(),
+	makingPrice: int('making_price').notNull(),
+	optionPrices: json('option_prices').$type<StyleOptionPrices>().notNull(),
+	leadDays: int('lead_days').notNull(),
+	sortOrder: int('sort_order').notNull().default(0),
+	retiredAt: timestamp('retired_at', { fsp: 3 }),
+	createdAt: created(),
+	updatedAt: updated()
+});
+
+export const fabrics = mysqlTable(
+	'fabric',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		slug: varchar('slug', { length: 80 }).notNull().unique(),
+		name: varchar('name', { length: 120 }).notNull(),
+		colour: varchar('colour', { length: 60 }).notNull(),
+		swatchHex: varchar('swatch_hex', { length: 7 }).notNull(),
+		// Shown before purchase: EU Regulation 1007/2011 wants the fibre content on the product page.
+		fibreContent: varchar('fibre_content', { length: 255 }).notNull(),
+		careText: text('care_text').notNull(),
+		widthCm: cm('width_cm', 5).notNull(),
+		pricePerMetre: int('price_per_metre').notNull(),
+		stockCm: cm('stock_cm', 8).notNull(),
+		nap: boolean('nap').notNull().default(false),
+		stretch: boolean('stretch').notNull().default(false),
+		shrinkagePct: decimal('shrinkage_pct', { precision: 4, scale: 1, mode: 'number' }).notNull().default(0),
+		imageUploadId: int('image_upload_id').references(() => uploads.id, { onDelete: 'set null' }),
+		retiredAt: timestamp('retired_at', { fsp: 3 }),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [index('fabric_image_idx').on(t.imageUploadId)]
+);
+
+// Every change of the drafting defaults is a new version; orders point at the version they were drafted with.
+export const houseRules = mysqlTable('house_rules', {
+	id: int('id').autoincrement().primaryKey(),
+	rules: json('rules').$type<Record<string, unknown>>().notNull(),
+	note: varchar('note', { length: 255 }).notNull().default(''),
+	createdBy: varchar('created_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+	createdAt: created()
+});
+
+export const shopSettings = mysqlTable('shop_setting', {
+	key: varchar('key', { length: 80 }).primaryKey(),
+	value: json('value').notNull(),
+	updatedAt: updated()
+});
+
+export type ShippingAddress = {
+	name: string;
+	line1: string;
+	line2?: string;
+	city: string;
+	postcode: string;
+	country: string;
+};
+
+export const orders = mysqlTable(
+	'order',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		number: varchar('number', { length: 20 }).notNull().unique(),
+		userId: varchar('user_id', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		email: varchar('email', { length: 255 }).notNull(),
+		shopperName: varchar('shopper_name', { length: 120 }).notNull(),
+		status: mysqlEnum('status', ORDER_STAGES).notNull().default('awaiting_payment'),
+		currency: varchar('currency', { length: 3 }).notNull().default('EUR'),
+		subtotal: int('subtotal').notNull(),
+		shipping: int('shipping').notNull(),
+		total: int('total').notNull(),
+		refundedTotal: int('refunded_total').notNull().default(0),
+		promisedDate: date('promised_date', { mode: 'string' }).notNull(),
+		shippingAddress: json('shipping_address').$type<ShippingAddress>().notNull(),
+		carrier: varchar('carrier', { length: 60 }),
+		trackingNumber: varchar('tracking_number', { length: 80 }),
+		houseRulesId: int('house_rules_id')
+			.notNull()
+			.references(() => houseRules.id),
+		paidAt: timestamp('paid_at', { fsp: 3 }),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [
+		index('order_status_idx').on(t.status, t.promisedDate),
+		index('order_user_idx').on(t.userId),
+		index('order_created_idx').on(t.createdAt),
+		index('order_rules_idx').on(t.houseRulesId)
+	]
+);
+
+export const orderLines = mysqlTable(
+	'order_line',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		orderId: int('order_id')
+			.notNull()
+			.references(() => orders.id, { onDelete: 'cascade' }),
+		styleId: int('style_id')
+			.notNull()
+			.references(() => styles.id),
+		fabricId: int('fabric_id')
+			.notNull()
+			.references(() => fabrics.id),
+		options: json('options').$type<Record<string, unknown>>().notNull(),
+		// What the shopper gave, in cm, exactly as drafted; the figures are the engine's output for them.
+		measurements: json('measurements').$type<Record<string, number | null>>().notNull(),
+		figures: json('figures').$type<Record<string, unknown>>().notNull(),
+		fabricCm: cm('fabric_cm', 6).notNull(),
+		pricing: json('pricing').$type<Record<string, number>>().notNull(),
+		lineTotal: int('line_total').notNull(),
+		createdAt: created()
+	},
+	(t) => [
+		index('order_line_order_idx').on(t.orderId),
+		index('order_line_style_idx').on(t.styleId),
+		index('order_line_fabric_idx').on(t.fabricId)
+	]
+);
+
+export const orderEvents = mysqlTable(
+	'order_event',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		orderId: int('order_id')
+			.notNull()
+			.references(() => orders.id, { onDelete: 'cascade' }),
+		actorId: varchar('actor_id', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		actorLabel: varchar('actor_label', { length: 120 }).notNull(),
+		kind: mysqlEnum('kind', ['stage', 'note', 'refund', 'mail']).notNull().default('stage'),
+		fromStatus: mysqlEnum('from_status', ORDER_STAGES),
+		toStatus: mysqlEnum('to_status', ORDER_STAGES),
+		note: text('note'),
+		createdAt: created()
+	},
+	(t) => [index('order_event_order_idx').on(t.orderId, t.createdAt), index('order_event_actor_idx').on(t.actorId)]
+);
+
+export const payments = mysqlTable(
+	'payment',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		orderId: int('order_id')
+			.notNull()
+			.references(() => orders.id, { onDelete: 'cascade' }),
+		provider: varchar('provider', { length: 20 }).notNull().default('stripe'),
+		checkoutSessionId: varchar('checkout_session_id', { length: 255 }).notNull().unique(),
+		paymentIntentId: varchar('payment_intent_id', { length: 255 }),
+		amount: int('amount').notNull(),
+		refundedAmount: int('refunded_amount').notNull().default(0),
+		currency: varchar('currency', { length: 3 }).notNull(),
+		state: mysqlEnum('state', ['open', 'paid', 'expired', 'failed', 'partially_refunded', 'refunded'])
+			.notNull()
+			.default('open'),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [index('payment_order_idx').on(t.orderId), index('payment_intent_idx').on(t.paymentIntentId)]
+);
+
+// Each provider event id once: a webhook delivered five times changes the order once.
+export const webhookEvents = mysqlTable('webhook_event', {
+	id: varchar('id', { length: 255 }).primaryKey(),
+	type: varchar('type', { length: 80 }).notNull(),
+	receivedAt: created()
+});
+
+// Mail waits here until the mail server takes it, so a mail outage never loses a message.
+export const outbox = mysqlTable(
+	'mail_outbox',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		orderId: int('order_id').references(() => orders.id, { onDelete: 'set null' }),
+		toAddress: varchar('to_address', { length: 255 }).notNull(),
+		subject: varchar('subject', { length: 255 }).notNull(),
+		text: text('text').notNull(),
+		html: text('html').notNull(),
+		attempts: int('attempts').notNull().default(0),
+		lastError: varchar('last_error', { length: 500 }),
+		nextAttemptAt: datetime('next_attempt_at', { fsp: 3 })
+			.notNull()
+			.default(sql`CURRENT_TIMESTAMP(3)`),
+		sentAt: timestamp('sent_at', { fsp: 3 }),
+		createdAt: created()
+	},
+	(t) => [index('mail_outbox_due_idx').on(t.sentAt, t.nextAttemptAt), index('mail_outbox_order_idx').on(t.orderId)]
+);

@@ -1,0 +1,19 @@
+import { count, sql } from 'drizzle-orm';
+import { db } from '$lib/server/db';
+import { orders, users } from '$lib/server/db/schema';
+import { lowStockFabrics, overdueCount, stageCounts } from '$lib/server/stats';
+import type { PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async () => {
+	const [counts, lowStock, overdue, staff, takings] = await Promise.all([
+		stageCounts(db),
+		lowStockFabrics(db),
+		overdueCount(db),
+		db.select({ role: users.role, n: count() }).from(users).where(sql`${users.role} <> 'shopper'`).groupBy(users.role),
+		db
+			.select({ total: sql<number>`COALESCE(SUM(${orders.total} - ${orders.refundedTotal}), 0)` })
+			.from(orders)
+			.where(sql`${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL 30 DAY)`)
+	]);
+	return { counts, lowStock, overdue, staff, takings30: Number(takings[0]?.total ?? 0) };
+};

@@ -1,0 +1,11 @@
+import { json } from '@sveltejs/kit';
+import { db } from '$lib/server/db';
+import { orderForShopper } from '$lib/server/orders/view';
+import type { RequestHandler } from './$types';
+
+// The order page polls this to keep its timeline current without a reload.
+export const GET: RequestHandler = async ({ params, locals, url }) => {
+	const order = await orderForShopper(db, params.number, locals.user, url.searchParams.get('t'));
+	if (!order) return json({ message: 'No such order.' }, { status: 404 });
+	return json(order, { headers: { 'cache-control': 'no-store' } });
+};

@@ -1,0 +1,5 @@
+import { requireRole } from '$lib/server/hooks/require';
+import type { LayoutServerLoad } from './$types';
+
+// The hooks guard every path under /workroom already; this keeps the page data typed with the user.
+export const load: LayoutServerLoad = ({ locals, url }) => ({ staffUser: requireRole(locals, url, ['cutter', 'owner']) });
