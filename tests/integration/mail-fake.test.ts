@@ -72,9 +72,7 @@ describe('mail fake', () => {
 		// The message page shows the text with its link made clickable, and the HTML only inside a sandboxed frame.
 		const page = await (await fetch(`${fake.webUrl}/messages/${m.id}`)).text();
 		expect(page).toContain('<a href="http://127.0.0.1:3000/orders/Q-1042?t=abc&amp;x=1"');
-		expect(page).toMatch(
-			/<iframe [^>]*sandbox="[^"]*"[^>]*srcdoc="[^"]*&lt;strong&gt;Q-1042&lt;\/strong&gt;/
-		);
+		expect(page).toMatch(/<iframe [^>]*sandbox="[^"]*"[^>]*srcdoc="[^"]*&lt;strong&gt;Q-1042&lt;\/strong&gt;/);
 		expect(page).not.toContain('<strong>Q-1042</strong>');
 	});
 
@@ -89,10 +87,7 @@ describe('mail fake', () => {
 			'Payment confirmed for Q-1042'
 		]);
 		const ines = await list('?to=ines.marlow@example.test');
-		expect(ines.map((m) => m.subject)).toEqual([
-			'Order Q-1042 shipped',
-			'Payment confirmed for Q-1042'
-		]);
+		expect(ines.map((m) => m.subject)).toEqual(['Order Q-1042 shipped', 'Payment confirmed for Q-1042']);
 		expect(await list('?to=nobody@example.test')).toEqual([]);
 	});
 

@@ -21,11 +21,7 @@ const plan: number[] = [];
 let fake: Awaited<ReturnType<typeof startPaymentFake>>;
 let stripe: Stripe;
 
-async function waitFor<T>(
-	probe: () => T | undefined | false | 0,
-	what: string,
-	ms = 5000
-): Promise<T> {
+async function waitFor<T>(probe: () => T | undefined | false | 0, what: string, ms = 5000): Promise<T> {
 	const until = Date.now() + ms;
 	for (;;) {
 		const v = probe();
@@ -36,18 +32,13 @@ async function waitFor<T>(
 }
 
 const forSession = (type: string, id: string) =>
-	deliveries.filter(
-		(d) => d.event.type === type && (d.event.data.object as { id: string }).id === id
-	);
+	deliveries.filter((d) => d.event.type === type && (d.event.data.object as { id: string }).id === id);
 
 /** Wait until `count` deliveries of `type` for session `id` have arrived; returns them. */
 const delivered = (type: string, id: string, count = 1) =>
 	waitFor(() => forSession(type, id).length >= count && forSession(type, id), `${count} × ${type}`);
 
-function newSession(
-	extra: Partial<Stripe.Checkout.SessionCreateParams> = {},
-	options?: Stripe.RequestOptions
-) {
+function newSession(extra: Partial<Stripe.Checkout.SessionCreateParams> = {}, options?: Stripe.RequestOptions) {
 	return stripe.checkout.sessions.create(
 		{
 			mode: 'payment',
@@ -142,9 +133,7 @@ describe('payment fake: API through the SDK', () => {
 		const again = await stripe.checkout.sessions.retrieve(s.id, { expand: ['line_items'] });
 		expect(again.client_reference_id).toBe('Q-1042');
 		expect(again.customer_email).toBe('ines.marlow@example.test');
-		expect(
-			again.line_items?.data.map((li) => [li.description, li.quantity, li.amount_total])
-		).toEqual([
+		expect(again.line_items?.data.map((li) => [li.description, li.quantity, li.amount_total])).toEqual([
 			['Pencil skirt, wool crepe', 2, 25800],
 			['Shipping', 1, 1500]
 		]);
@@ -154,10 +143,9 @@ describe('payment fake: API through the SDK', () => {
 		const a = await newSession({}, { idempotencyKey: 'order-Q-1042-try-1' });
 		const b = await newSession({}, { idempotencyKey: 'order-Q-1042-try-1' });
 		expect(b.id).toBe(a.id);
-		const err = await newSession(
-			{ client_reference_id: 'Q-9999' },
-			{ idempotencyKey: 'order-Q-1042-try-1' }
-		).catch((e) => e);
+		const err = await newSession({ client_reference_id: 'Q-9999' }, { idempotencyKey: 'order-Q-1042-try-1' }).catch(
+			(e) => e
+		);
 		expect(err).toBeInstanceOf(Stripe.errors.StripeIdempotencyError);
 	});
 
@@ -215,11 +203,7 @@ describe('payment fake: paying', () => {
 		expect(event.type).toBe('checkout.session.completed');
 		expect(event.id).toMatch(/^evt_/);
 		const obj = event.data.object as Stripe.Checkout.Session;
-		expect([obj.payment_status, obj.metadata?.order_id, obj.payment_intent]).toEqual([
-			'paid',
-			'Q-1042',
-			pi.id
-		]);
+		expect([obj.payment_status, obj.metadata?.order_id, obj.payment_intent]).toEqual(['paid', 'Q-1042', pi.id]);
 
 		const tampered = d.body.replace('"amount_total": 27300', '"amount_total": 100');
 		expect(tampered).not.toBe(d.body);
@@ -265,18 +249,10 @@ describe('payment fake: paying', () => {
 		expect(await other.text()).toContain('This is a test payment page: use a test card number');
 
 		const control = await payViaControl(s.id, DECLINE);
-		expect([control.status, control.body.outcome, control.body.error.code]).toEqual([
-			402,
-			'declined',
-			'card_declined'
-		]);
+		expect([control.status, control.body.outcome, control.body.error.code]).toEqual([402, 'declined', 'card_declined']);
 
 		const still = await stripe.checkout.sessions.retrieve(s.id);
-		expect([still.status, still.payment_status, still.payment_intent]).toEqual([
-			'open',
-			'unpaid',
-			null
-		]);
+		expect([still.status, still.payment_status, still.payment_intent]).toEqual(['open', 'unpaid', null]);
 
 		const retry = await postForm(String(s.url), { card: SUCCESS, exp: '12/40', cvc: '123' });
 		expect(retry.status).toBe(303);
@@ -293,18 +269,14 @@ describe('payment fake: webhook delivery', () => {
 		const rec = await waitFor(
 			() =>
 				fake.events.find(
-					(e) =>
-						e.type === 'checkout.session.completed' &&
-						e.event.data.object.id === s.id &&
-						e.status === 'delivered'
+					(e) => e.type === 'checkout.session.completed' && e.event.data.object.id === s.id && e.status === 'delivered'
 				),
 			'delivered after retries'
 		);
 		expect(rec.attempts.map((a) => a.status)).toEqual([500, 500, 200]);
 		const got = forSession('checkout.session.completed', s.id);
 		expect(got).toHaveLength(3);
-		for (const d of got)
-			expect(stripe.webhooks.constructEvent(d.body, d.signature, SECRET).id).toBe(rec.id);
+		for (const d of got) expect(stripe.webhooks.constructEvent(d.body, d.signature, SECRET).id).toBe(rec.id);
 
 		const listed = await (await fetch(`${fake.url}/_fake/events`)).json();
 		const same = listed.data.find((e: { id: string }) => e.id === rec.id);
@@ -335,25 +307,17 @@ describe('payment fake: webhook delivery', () => {
 		const expired = await stripe.checkout.sessions.expire(s.id);
 		expect([expired.status, expired.url]).toEqual(['expired', null]);
 		const [d] = await delivered('checkout.session.expired', s.id);
-		expect(stripe.webhooks.constructEvent(d.body, d.signature, SECRET).type).toBe(
-			'checkout.session.expired'
-		);
+		expect(stripe.webhooks.constructEvent(d.body, d.signature, SECRET).type).toBe('checkout.session.expired');
 
 		expect((await payViaControl(s.id, SUCCESS)).status).toBe(409);
-		expect(await (await fetch(`${fake.url}/pay/${s.id}`)).text()).toContain(
-			'This payment page has expired'
-		);
+		expect(await (await fetch(`${fake.url}/pay/${s.id}`)).text()).toContain('This payment page has expired');
 		const again = await stripe.checkout.sessions.expire(s.id).catch((e) => e);
 		expect(again).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
 	});
 
 	it('expires a session on its own once expires_at passes', async () => {
 		const s = await newSession({ expires_at: Math.floor(Date.now() / 1000) + 1 });
-		await waitFor(
-			() => forSession('checkout.session.expired', s.id).length === 1,
-			'timer expiry',
-			4000
-		);
+		await waitFor(() => forSession('checkout.session.expired', s.id).length === 1, 'timer expiry', 4000);
 		expect((await stripe.checkout.sessions.retrieve(s.id)).status).toBe('expired');
 	});
 
@@ -363,9 +327,7 @@ describe('payment fake: webhook delivery', () => {
 		const pi = String((await stripe.checkout.sessions.retrieve(s.id)).payment_intent);
 		const refundEvents = () =>
 			deliveries.filter(
-				(d) =>
-					d.event.type === 'charge.refunded' &&
-					(d.event.data.object as Stripe.Charge).payment_intent === pi
+				(d) => d.event.type === 'charge.refunded' && (d.event.data.object as Stripe.Charge).payment_intent === pi
 			);
 
 		const part = await stripe.refunds.create({
@@ -376,9 +338,7 @@ describe('payment fake: webhook delivery', () => {
 		expect([part.amount, part.status]).toEqual([5000, 'succeeded']);
 		expect((await stripe.refunds.retrieve(part.id)).amount).toBe(5000);
 
-		const tooMuch = await stripe.refunds
-			.create({ payment_intent: pi, amount: 30000 })
-			.catch((e) => e);
+		const tooMuch = await stripe.refunds.create({ payment_intent: pi, amount: 30000 }).catch((e) => e);
 		expect(tooMuch).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
 		expect([tooMuch.statusCode, tooMuch.code]).toEqual([400, 'amount_too_large']);
 
@@ -387,12 +347,9 @@ describe('payment fake: webhook delivery', () => {
 
 		await waitFor(() => refundEvents().length === 2, 'two refund webhooks');
 		const charges = refundEvents().map(
-			(d) =>
-				stripe.webhooks.constructEvent(d.body, d.signature, SECRET).data.object as Stripe.Charge
+			(d) => stripe.webhooks.constructEvent(d.body, d.signature, SECRET).data.object as Stripe.Charge
 		);
-		expect(
-			charges.map((c) => [c.amount, c.amount_refunded, c.refunded, c.metadata.order_id])
-		).toEqual([
+		expect(charges.map((c) => [c.amount, c.amount_refunded, c.refunded, c.metadata.order_id])).toEqual([
 			[27300, 5000, false, 'Q-1042'],
 			[27300, 27300, true, 'Q-1042']
 		]);
