@@ -16,7 +16,10 @@ const children = [];
 /** @type {null | (() => Promise<void>)} */
 let stopDb = null;
 const tally = { passed: 0, failed: 0, skipped: 0 };
-const only = process.argv.slice(2); // e.g. `npm test -- unit e2e`
+// `npm test -- unit e2e` runs only those parts; QL_TEST_FILES narrows vitest and Playwright to
+// matching files (e.g. QL_TEST_FILES=ticket npm test -- integration).
+const only = process.argv.slice(2);
+const fileFilter = (process.env.QL_TEST_FILES ?? '').split(/[ ,]+/).filter(Boolean);
 const wants = (/** @type {string} */ part) => only.length === 0 || only.includes(part);
 
 async function main() {
@@ -100,7 +103,7 @@ async function main() {
 	if (projects.length) {
 		step(`vitest (${projects.join(' + ')})`);
 		const out = join(work, 'vitest.json');
-		spawnSync('npx', ['vitest', 'run', ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${out}`], {
+		spawnSync('npx', ['vitest', 'run', ...projects.flatMap((p) => ['--project', p]), ...fileFilter, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`], {
 			cwd: ROOT,
 			stdio: 'inherit',
 			env: { ...process.env, ...testEnv }
@@ -113,7 +116,7 @@ async function main() {
 	if (wants('e2e')) {
 		step('Playwright in Chromium');
 		const out = join(work, 'playwright.json');
-		spawnSync('npx', ['playwright', 'test', '-c', 'tests/playwright.config.ts'], {
+		spawnSync('npx', ['playwright', 'test', '-c', 'tests/playwright.config.ts', ...fileFilter], {
 			cwd: ROOT,
 			stdio: 'inherit',
 			env: { ...process.env, ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: out }

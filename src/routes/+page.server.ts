@@ -1,9 +1,11 @@
 import { db } from '$lib/server/db';
 import { listStyles } from '$lib/server/catalogue';
+import { currentRules } from '$lib/server/shop/rules';
+import { sampleDrawing } from '$lib/server/shop/sample';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async () => {
-	const styles = await listStyles(db);
+	const [styles, { id, rules }] = await Promise.all([listStyles(db), currentRules(db)]);
 	return {
 		styles: styles.map((s) => ({
 			slug: s.slug,
@@ -11,7 +13,8 @@ export const load: PageServerLoad = async () => {
 			kind: s.kind,
 			description: s.description,
 			makingPrice: s.makingPrice,
-			leadDays: s.leadDays
+			leadDays: s.leadDays,
+			drawing: sampleDrawing(s.kind, rules, id, 'pieces')
 		}))
 	};
 };

@@ -19,7 +19,7 @@ export function postForm(path: string, fields: Record<string, string>, cookie?: 
 	return fetch(`${testEnv.appUrl}${path}`, {
 		method: 'POST',
 		redirect: 'manual',
-		headers: { 'content-type': 'application/x-www-form-urlencoded', origin: testEnv.appUrl, ...(cookie ? { cookie } : {}) },
+		headers: { 'content-type': 'application/x-www-form-urlencoded', accept: 'text/html', origin: testEnv.appUrl, ...(cookie ? { cookie } : {}) },
 		body: new URLSearchParams(fields)
 	});
 }

@@ -1,7 +1,9 @@
-import { desc, eq } from 'drizzle-orm';
+import { fail } from '@sveltejs/kit';
+import { and, desc, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { measurementProfiles, orders } from '$lib/server/db/schema';
-import type { PageServerLoad } from './$types';
+import { deleteMeasurements } from '$lib/server/shop/personal-data';
+import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals }) => {
 	const userId = locals.user!.id;
@@ -12,6 +14,23 @@ export const load: PageServerLoad = async ({ locals }) => {
 			.from(orders)
 			.where(eq(orders.userId, userId))
 			.orderBy(desc(orders.createdAt))
+			.limit(5)
 	]);
 	return { cards, orders: myOrders };
+};
+
+export const actions: Actions = {
+	deleteCard: async ({ request, locals }) => {
+		const id = Number((await request.formData()).get('id'));
+		if (!Number.isInteger(id)) return fail(400, { message: 'No such card.' });
+		// Only her own card: the user id is part of the condition.
+		await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, locals.user!.id)));
+		return { message: 'Measure card deleted.' };
+	},
+	deleteMeasurements: async ({ locals }) => {
+		const r = await deleteMeasurements(db, locals.user!.id);
+		return {
+			message: `Deleted ${r.cards} measure card${r.cards === 1 ? '' : 's'} and the measurements of ${r.cleared} finished order${r.cleared === 1 ? '' : 's'}.${r.kept ? ` We keep them for ${r.kept} order${r.kept === 1 ? '' : 's'} still being made, and delete them when you ask again after it ships.` : ''}`
+		};
+	}
 };

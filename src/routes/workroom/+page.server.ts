@@ -1,8 +1,9 @@
 import { db } from '$lib/server/db';
 import { lowStockFabrics, overdueCount, stageCounts } from '$lib/server/stats';
+import { workQueue } from '$lib/server/workroom/queue';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async () => {
-	const [counts, lowStock, overdue] = await Promise.all([stageCounts(db), lowStockFabrics(db), overdueCount(db)]);
-	return { counts: counts.filter((c) => ['paid', 'cutting', 'sewn', 'finished'].includes(c.stage)), lowStock, overdue };
+	const [counts, lowStock, overdue, queue] = await Promise.all([stageCounts(db), lowStockFabrics(db), overdueCount(db), workQueue(db)]);
+	return { counts: counts.filter((c) => ['paid', 'cutting', 'sewn', 'finished'].includes(c.stage)), lowStock, overdue, queue };
 };

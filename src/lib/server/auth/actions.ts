@@ -1,4 +1,5 @@
 import { isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { AuthError, CredentialsSignin } from '@auth/sveltekit';
 import { signIn } from './index';
 
 export type SignInOutcome = { ok: true; location: string } | { ok: false; code: string };
@@ -25,6 +26,9 @@ export async function signInWith(event: RequestEvent, providerId: 'credentials' 
 			if (error) return { ok: false, code: url.searchParams.get('code') ?? error };
 			return { ok: true, location: e.location };
 		}
+		// Called in-process, Auth.js throws its sign-in errors instead of redirecting to its error page.
+		if (e instanceof CredentialsSignin) return { ok: false, code: e.code };
+		if (e instanceof AuthError) return { ok: false, code: e.type };
 		throw e;
 	}
 	return { ok: false, code: 'unknown' };

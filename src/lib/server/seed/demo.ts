@@ -1,10 +1,10 @@
 // Seeds the invented demo atelier. Idempotent: every row has a natural key (e-mail, slug, order
 // number) and is only inserted when missing, so a second run leaves the same rows.
-import { eq, sql } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { hashPassword } from '../auth/password';
 import type { Db } from '../db/client';
 import { fabrics, houseRules, orderEvents, orderLines, orders, payments, shopSettings, styles, users } from '../db/schema';
-import { DEFAULT_RULES, draftSkirt, estimateFabric } from '../../drafting';
+import { DEFAULT_RULES, draftSkirt, estimateFabric, type StyleId } from '../../drafting';
 import { priceLine, shippingCost } from '../../pricing';
 import { STAGE_LABELS } from '../../orders/stages';
 import { DEMO_SIGN_INS } from './demo-accounts.js';
@@ -32,13 +32,13 @@ export async function seedDemo(db: Db, now = new Date()) {
 		}
 	}
 	for (const [key, value] of Object.entries(DEFAULT_SETTINGS)) {
-		await db.insert(shopSettings).values({ key, value }).onDuplicateKeyUpdate({ set: { key: sql`\`key\`` } });
+		await db.insert(shopSettings).ignore().values({ key, value });
 	}
 	for (const s of DEMO_STYLES) {
-		await db.insert(styles).values({ ...s, optionPrices: DEMO_OPTION_PRICES }).onDuplicateKeyUpdate({ set: { slug: sql`slug` } });
+		await db.insert(styles).ignore().values({ ...s, optionPrices: DEMO_OPTION_PRICES });
 	}
 	for (const f of DEMO_FABRICS) {
-		await db.insert(fabrics).values({ ...f }).onDuplicateKeyUpdate({ set: { slug: sql`slug` } });
+		await db.insert(fabrics).ignore().values({ ...f });
 	}
 	let [rules] = await db.select().from(houseRules).orderBy(houseRules.id).limit(1);
 	if (!rules) {
@@ -56,7 +56,8 @@ export async function seedDemo(db: Db, now = new Date()) {
 		if (existing) continue;
 		const style = styleRows.get(o.style)!;
 		const fabric = fabricRows.get(o.fabric)!;
-		const draft = draftSkirt(o.measurements.waistToHip === null ? { ...o.measurements, waistToHip: undefined } : o.measurements, { style: style.kind, ...o.options } as never, DEFAULT_RULES);
+		const { waistToHip, ...girths } = o.measurements;
+		const draft = draftSkirt(waistToHip === null ? girths : { ...girths, waistToHip }, { style: style.kind as StyleId, ...o.options }, DEFAULT_RULES);
 		const estimate = estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct });
 		const pricing = priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: o.options, optionPrices: style.optionPrices });
 		const shipping = shippingCost(pricing.total, DEFAULT_SETTINGS.shipping);

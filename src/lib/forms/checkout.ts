@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { email } from './auth';
+
+// Countries the atelier ships to (ISO 3166-1 alpha-2 codes).
+export const COUNTRIES = [
+	['AT', 'Austria'],
+	['BE', 'Belgium'],
+	['DE', 'Germany'],
+	['DK', 'Denmark'],
+	['ES', 'Spain'],
+	['FI', 'Finland'],
+	['FR', 'France'],
+	['IE', 'Ireland'],
+	['IT', 'Italy'],
+	['NL', 'Netherlands'],
+	['NO', 'Norway'],
+	['PT', 'Portugal'],
+	['SE', 'Sweden'],
+	['GB', 'United Kingdom']
+] as const;
+
+const text = (label: string, max = 120) => z.string().trim().min(1, `Enter your ${label}.`).max(max, `Keep the ${label} under ${max} characters.`);
+
+export const checkoutSchema = z.object({
+	email,
+	name: text('name'),
+	line1: text('street and number', 160),
+	line2: z.string().trim().max(160).default(''),
+	city: text('town or city', 80),
+	postcode: text('postcode', 20),
+	country: z.enum(COUNTRIES.map(([c]) => c) as [string, ...string[]], { error: 'Choose the country we ship to.' }),
+	// Body measurements are personal data: drafting from them needs her explicit agreement.
+	measurementConsent: z.literal(true, { error: 'We need your agreement to draft from your measurements.' }),
+	madeToMeasure: z.literal(true, { error: 'Please confirm you have read how returns work for made-to-measure skirts.' })
+});

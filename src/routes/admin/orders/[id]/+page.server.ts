@@ -1,0 +1,49 @@
+import { error, fail } from '@sveltejs/kit';
+import { z } from 'zod';
+import { stageSchema } from '$lib/forms/stage';
+import { db } from '$lib/server/db';
+import { orderEvents } from '$lib/server/db/schema';
+import { deliverQueued } from '$lib/server/mail';
+import { requestRefund } from '$lib/server/admin/refund';
+import { stripe } from '$lib/server/payments/stripe';
+import { workroomMove } from '$lib/server/workroom/moves';
+import { staffOrder } from '$lib/server/workroom/order';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ params }) => {
+	const found = await staffOrder(db, Number(params.id));
+	if (!found) error(404, 'No such order.');
+	return found;
+};
+
+const refundSchema = z.object({
+	amount: z.coerce.number({ error: 'Enter the amount in euros.' }).positive('Enter the amount in euros.').max(100_000),
+	reason: z.string().trim().max(200).default('')
+});
+
+export const actions: Actions = {
+	note: async ({ params, request, locals }) => {
+		const note = String((await request.formData()).get('note') ?? '').trim();
+		if (!note) return fail(400, { message: 'Write the note first.' });
+		if (note.length > 2000) return fail(400, { message: 'Keep a note under 2000 characters.' });
+		await db.insert(orderEvents).values({ orderId: Number(params.id), actorId: locals.user!.id, actorLabel: locals.user!.name, kind: 'note', note });
+		return { message: 'Note added.' };
+	},
+	refund: async ({ params, request, locals }) => {
+		const parsed = refundSchema.safeParse(Object.fromEntries(await request.formData()));
+		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
+		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: locals.user!.id, label: locals.user!.name }, parsed.data.reason);
+		if (!r.ok) return fail(400, { message: r.message });
+		return { message: 'Refund sent to the payment service; the order updates when it confirms.' };
+	},
+	move: async ({ params, request, locals }) => {
+		const form = Object.fromEntries(await request.formData());
+		const parsed = stageSchema.safeParse({ ...form, overrideStock: form.overrideStock === 'on' });
+		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
+		const user = locals.user!;
+		const result = await workroomMove(db, { orderId: Number(params.id), ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
+		if (!result.ok) return fail(result.status, { message: result.message });
+		await deliverQueued(result.mailIds);
+		return { message: 'Stage changed.' };
+	}
+};

@@ -1,0 +1,15 @@
+import { redirect } from '@sveltejs/kit';
+import { db } from '$lib/server/db';
+import { readBag, writeBag } from '$lib/server/shop/bag';
+import { viewBag } from '$lib/server/shop/bag-view';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ cookies }) => ({ bag: await viewBag(db, readBag(cookies)) });
+
+export const actions: Actions = {
+	remove: async ({ request, cookies, url }) => {
+		const id = String((await request.formData()).get('id') ?? '');
+		writeBag(cookies, readBag(cookies).filter((i) => i.id !== id), url.protocol === 'https:');
+		redirect(303, '/bag');
+	}
+};

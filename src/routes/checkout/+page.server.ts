@@ -1,0 +1,49 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { env } from '$env/dynamic/private';
+import { checkoutSchema } from '$lib/forms/checkout';
+import { db } from '$lib/server/db';
+import { deliverQueued } from '$lib/server/mail';
+import { orderLink } from '$lib/server/orders/link';
+import { stripe } from '$lib/server/payments/stripe';
+import { clearBag, readBag } from '$lib/server/shop/bag';
+import { viewBag } from '$lib/server/shop/bag-view';
+import { placeOrder, startPayment } from '$lib/server/shop/checkout';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ cookies, locals }) => {
+	const items = readBag(cookies);
+	if (items.length === 0) redirect(303, '/bag');
+	const form = await superValidate(zod4(checkoutSchema), { errors: false });
+	if (locals.user) {
+		form.data.email = locals.user.email;
+		form.data.name = locals.user.name;
+	}
+	return { form, bag: await viewBag(db, items) };
+};
+
+export const actions: Actions = {
+	default: async ({ request, cookies, locals, url }) => {
+		const form = await superValidate(request, zod4(checkoutSchema));
+		if (!form.valid) return fail(400, { form });
+		const d = form.data;
+		const placed = await placeOrder(db, readBag(cookies), {
+			email: d.email,
+			name: d.name,
+			userId: locals.user?.id ?? null,
+			address: { name: d.name, line1: d.line1, ...(d.line2 ? { line2: d.line2 } : {}), city: d.city, postcode: d.postcode, country: d.country }
+		});
+		if (!placed.ok) return message(form, placed.problem.message, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
+		clearBag(cookies);
+		await deliverQueued(placed.mailIds);
+		const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
+		// The order is saved either way; when the payment service is away she lands on her order
+		// page, which says so and offers to try again.
+		if (!payment.ok) {
+			const link = new URL(orderLink(placed.order.number));
+			redirect(303, `${link.pathname}${link.search}&retry=1`);
+		}
+		redirect(303, payment.url);
+	}
+};
