@@ -1,0 +1,17 @@
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { fabricSchema } from '../../forms';
+import { saveFabric } from '../../fabric-save.server';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async () => {
+	const form = await superValidate(zod4(fabricSchema));
+	// A neutral starting colour and the figures most bolts share, so the owner changes only what differs.
+	form.data.swatchHex = '#8a7f72';
+	form.data.shrinkagePct = '0';
+	return { form };
+};
+
+export const actions: Actions = {
+	save: (event) => saveFabric(event, null)
+};

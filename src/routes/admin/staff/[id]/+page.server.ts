@@ -1,0 +1,72 @@
+import { error, fail as kitFail } from '@sveltejs/kit';
+import { eq } from 'drizzle-orm';
+import { fail, message, setError, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { db } from '$lib/server/db';
+import { sessions, users, verificationTokens } from '$lib/server/db/schema';
+import { roleSchema, ROLE_CHOICES } from '../forms';
+import type { Actions, PageServerLoad } from './$types';
+
+async function accountFor(id: string) {
+	const [row] = id.length <= 255 ? await db.select().from(users).where(eq(users.id, id)).limit(1) : [];
+	if (!row) error(404, 'There is no such account.');
+	return row;
+}
+
+export const load: PageServerLoad = async ({ params, locals }) => {
+	const u = await accountFor(params.id);
+	return {
+		account: {
+			id: u.id,
+			name: u.name,
+			email: u.email,
+			role: u.role,
+			disabledAt: u.disabledAt,
+			createdAt: u.createdAt,
+			hasPassword: Boolean(u.passwordHash)
+		},
+		self: u.id === locals.user!.id,
+		form: await superValidate({ role: u.role, confirm: false }, zod4(roleSchema), { errors: false })
+	};
+};
+
+// The owner cannot take her own rights away: the back office always keeps at least the owner
+// who is using it, and nobody locks themselves out by a slip.
+const SELF = 'This is your own account: another owner can change its role or switch it off.';
+
+export const actions: Actions = {
+	role: async ({ request, params, locals }) => {
+		const u = await accountFor(params.id);
+		const form = await superValidate(request, zod4(roleSchema));
+		if (u.id === locals.user!.id) return message(form, SELF, { status: 403 });
+		if (!form.valid) return fail(400, { form });
+		if (form.data.role === u.role) return setError(form, 'role', `${u.name ?? u.email} is a ${u.role} already.`);
+		await db.update(users).set({ role: form.data.role }).where(eq(users.id, u.id));
+		form.data.confirm = false;
+		const label = ROLE_CHOICES.find((c) => c.id === form.data.role)!.label.toLowerCase();
+		return message(form, `${u.name ?? u.email} is a ${label} now. It counts from their next click.`);
+	},
+	disable: async ({ request, params, locals }) => {
+		const u = await accountFor(params.id);
+		if (u.id === locals.user!.id) return kitFail(403, { problem: SELF });
+		const confirmed = (await request.formData()).get('confirm') === 'on';
+		if (!confirmed)
+			return kitFail(400, { problem: 'Tick the box to confirm: switching an account off signs them out at once.' });
+		if (u.disabledAt) return kitFail(409, { problem: 'This account is switched off already.' });
+		await db.update(users).set({ disabledAt: new Date() }).where(eq(users.id, u.id));
+		// Their session is checked against the database on every request, so they are out now; any
+		// sign-in link still in their inbox goes too.
+		await db.delete(sessions).where(eq(sessions.userId, u.id));
+		if (u.email) await db.delete(verificationTokens).where(eq(verificationTokens.identifier, u.email));
+		return {
+			notice: `Switched off. ${u.name ?? u.email} is signed out and cannot sign in until you switch the account back on.`
+		};
+	},
+	enable: async ({ params, locals }) => {
+		const u = await accountFor(params.id);
+		if (u.id === locals.user!.id) return kitFail(403, { problem: SELF });
+		if (!u.disabledAt) return kitFail(409, { problem: 'This account is switched on already.' });
+		await db.update(users).set({ disabledAt: null }).where(eq(users.id, u.id));
+		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
+	}
+};
