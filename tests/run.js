@@ -3,18 +3,14 @@
 // build folder and free ports, so it runs beside a running npm start. Then svelte-check, vitest
 // (unit and integration) and Playwright; the last line sums every runner: "N passed, N failed".
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { ensureDebianPackages, ensurePackages, freePort, run, startService, step, done, ROOT } from '../fakes/stack/bootstrap.js';
-import { appEnv, localConfig } from '../fakes/stack/config.js';
-import { startMariaDB } from '../fakes/db/mariadb.js';
+import { ensureDebianPackages, ensurePackages, step, ROOT } from '../fakes/stack/bootstrap.js';
+import { startStack } from '../fakes/stack/stack.js';
 
-const runId = `${process.pid}-${Date.now().toString(36)}`;
-const work = join(ROOT, '.data', `test-${runId}`);
-/** @type {import('node:child_process').ChildProcess[]} */
-const children = [];
-/** @type {null | (() => Promise<void>)} */
-let stopDb = null;
+/** @type {Awaited<ReturnType<typeof startStack>> | null} */
+let stack = null;
 const tally = { passed: 0, failed: 0, skipped: 0 };
 // `npm test -- unit e2e` runs only those parts; QL_TEST_FILES narrows vitest and Playwright to
 // matching files (e.g. QL_TEST_FILES=ticket npm test -- integration).
@@ -25,79 +21,18 @@ const wants = (/** @type {string} */ part) => only.length === 0 || only.includes
 async function main() {
 	ensurePackages();
 	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'], chromium: ['chromium'], pdftoppm: ['poppler-utils'] });
-	mkdirSync(work, { recursive: true });
-
-	const base = localConfig();
-	const [dbPort, appPort, paymentsPort, smtpPort, mailWebPort] = await Promise.all([freePort(), freePort(), freePort(), freePort(), freePort()]);
-	const config = {
-		...base,
-		dbPort,
-		appPort,
-		paymentsPort,
-		smtpPort,
-		mailWebPort,
-		origin: `http://127.0.0.1:${appPort}`,
-		authSecret: `test-secret-${runId}-long-enough-for-jwt`,
-		uploadDir: join(work, 'uploads'),
-		db: { ...base.db, database: 'quarterline_test' }
-	};
-
-	step(`Starting a fresh MariaDB for the tests on 127.0.0.1:${dbPort}`);
-	const db = await startMariaDB({ dataDir: join(work, 'mariadb'), port: dbPort, app: config.db });
-	stopDb = db.stop;
-	done();
-	const env = {
-		...appEnv(config, db.url),
-		// Mail retries fast in tests, so an outage test does not wait minutes.
-		OUTBOX_INTERVAL_MS: '500'
-	};
-
-	step('Migrating and seeding the test database');
-	run(process.execPath, ['src/lib/server/db/migrate.js'], { env, quiet: true });
-	run(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/lib/server/seed/run.ts'], { env, quiet: true });
-	done();
-
+	// svelte-check first: it needs no running system and fails fastest.
 	if (wants('check')) {
 		step('svelte-check');
 		const r = spawnSync('npm', ['run', '--silent', 'check'], { cwd: ROOT, stdio: 'inherit' });
 		count('svelte-check', r.status === 0 ? 1 : 0, r.status === 0 ? 0 : 1);
 	}
-
-	const buildDir = join(work, 'build');
-	step('Building the app for the tests');
-	run('npx', ['vite', 'build', '--logLevel', 'error'], { quiet: true, env: { QL_BUILD_DIR: buildDir } });
-	done();
-
-	step('Starting the fakes and the app on free ports');
-	children.push(
-		await startService('mail', ['fakes/mail/server.js'], {
-			env: { MAIL_SMTP_PORT: String(smtpPort), MAIL_WEB_PORT: String(mailWebPort) },
-			ready: `http://127.0.0.1:${mailWebPort}/healthz`,
-			quiet: true
-		})
-	);
-	children.push(
-		await startService('payments', ['fakes/payments/server.js'], {
-			env: { PAYMENTS_PORT: String(paymentsPort), PAYMENTS_WEBHOOK_URL: `${config.origin}/api/webhooks/stripe`, STRIPE_WEBHOOK_SECRET: config.webhookSecret },
-			ready: `http://127.0.0.1:${paymentsPort}/_fake/healthz`,
-			quiet: true
-		})
-	);
-	children.push(await startService('app', [join(buildDir, 'index.js')], { env, ready: `${config.origin}/healthz`, quiet: !process.env.QL_TEST_APP_LOG }));
-	done();
-
-	// What the tests read to find the running system.
-	const testEnv = {
-		...env,
-		QL_TEST: '1',
-		APP_URL: config.origin,
-		MAIL_URL: `http://127.0.0.1:${mailWebPort}`,
-		PAYMENTS_URL: `http://127.0.0.1:${paymentsPort}`,
-		DB_SOCKET: db.socket,
-		DB_PORT: String(dbPort),
-		QL_TEST_WORK: work,
-		QL_BUILD_DIR: buildDir
-	};
+	if (!['unit', 'integration', 'e2e'].some(wants)) return;
+	// Unit tests need no running system; the others get a whole one of their own.
+	// Mail retries fast in tests, so an outage test does not wait minutes.
+	if (wants('integration') || wants('e2e')) stack = await startStack({ name: 'test', quiet: !process.env.QL_TEST_APP_LOG, appEnv: { OUTBOX_INTERVAL_MS: '500', OUTBOX_RETRY_SCALE: '0.02' } });
+	const work = stack?.work ?? mkdtempSync(join(tmpdir(), 'quarterline-unit-'));
+	const testEnv = { ...stack?.testEnv, QL_TEST: '1' };
 
 	const projects = ['unit', 'integration'].filter(wants);
 	if (projects.length) {
@@ -136,10 +71,7 @@ function count(runner, passed, failed, skipped = 0) {
 }
 
 async function cleanup() {
-	for (const c of children.reverse()) c.kill('SIGTERM');
-	await new Promise((r) => setTimeout(r, 300));
-	if (stopDb) await stopDb();
-	if (!process.env.QL_KEEP_TEST_DATA) rmSync(work, { recursive: true, force: true });
+	if (stack) await stack.stop({ keep: Boolean(process.env.QL_KEEP_TEST_DATA) });
 }
 
 let exitCode = 0;

@@ -14,6 +14,8 @@
 //   POST /_fake/sessions/:id/expire  expire now (sends checkout.session.expired)
 //   GET  /_fake/events               every event with its delivery attempts and status
 //   POST /_fake/events/:id/redeliver same event again, newly signed, with retries
+//   POST /_fake/payment_intents      JSON {id, amount, currency, amount_refunded?, metadata?} (or a list):
+//                                    register payments made before this process started, e.g. the demo seed's
 //   GET  /_fake/healthz              {ok:true}
 import { createServer } from 'node:http';
 import { pathToFileURL } from 'node:url';
@@ -102,6 +104,18 @@ export async function startPaymentFake({
 			const rec = sender.redeliver(id);
 			if (!rec) throw new ApiError(404, 'resource_missing', `No such event: '${id}'`);
 			return sendJson(res, 202, rec);
+		}
+		if (method === 'POST' && a === 'payment_intents' && seg.length === 1) {
+			const raw = await readBody(req);
+			/** @type {any} */
+			let input;
+			try {
+				input = JSON.parse(raw || 'null');
+			} catch {
+				throw new ApiError(400, 'invalid_json', 'The body must be JSON.');
+			}
+			const list = Array.isArray(input) ? input : [input];
+			return sendJson(res, 201, { data: list.map((p) => ledger.importPayment(p)) });
 		}
 		if (method === 'POST' && a === 'sessions' && action === 'expire') {
 			return sendJson(res, 200, ledger.expireSession(id, 'control'));

@@ -65,6 +65,7 @@ async function main() {
 			ready: `http://127.0.0.1:${config.paymentsPort}/_fake/healthz`
 		})
 	);
+	run(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/lib/server/seed/register-payments.ts'], { env: { ...env, PAYMENTS_URL: `http://127.0.0.1:${config.paymentsPort}` }, quiet: true });
 	done();
 
 	step('Starting the app');

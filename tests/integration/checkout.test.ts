@@ -62,7 +62,7 @@ describe('checkout through the payment fake', () => {
 			return r.order.status === 'paid' ? r : null;
 		});
 		const { data: events } = await (await fetch(`${testEnv.paymentsUrl}/_fake/events`)).json();
-		const completed = events.find((e: { type: string; data: { object: { id: string } } }) => e.type === 'checkout.session.completed' && e.data.object.id === sessionId);
+		const completed = events.find((e: { type: string; event: { data: { object: { id: string } } } }) => e.type === 'checkout.session.completed' && e.event.data.object.id === sessionId);
 		for (let i = 0; i < 4; i++) await fetch(`${testEnv.paymentsUrl}/_fake/events/${completed.id}/redeliver`, { method: 'POST' });
 		await new Promise((r) => setTimeout(r, 1500));
 		const [{ n }] = await db.select({ n: count() }).from(orderEvents).where(and(eq(orderEvents.orderId, order.id), eq(orderEvents.toStatus, 'paid')));

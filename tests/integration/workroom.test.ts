@@ -132,6 +132,16 @@ describe('refunds through the payment fake', () => {
 	});
 });
 
+describe('refunds on the demo atelier’s past orders', () => {
+	it('refunds a seeded delivered order through the payment fake, which learned of it at start', async () => {
+		const o = await orderId('QL-1002');
+		const res = await postForm(`/admin/orders/${o.id}?/refund`, { amount: '12.50', reason: 'hem let down by hand' }, cookie.owner);
+		expect(res.status).toBe(200);
+		const after = await eventually(async () => ((await orderId('QL-1002')).refundedTotal === o.refundedTotal + 1250 ? orderId('QL-1002') : null));
+		expect(after.status).toBe('delivered'); // a partial refund leaves the stage alone
+	});
+});
+
 describe('the orders table', () => {
 	it('searches, filters by stage and exports the same rows as CSV', async () => {
 		const get = (q: string) => fetch(`${testEnv.appUrl}${q}`, { headers: { cookie: cookie.owner } });

@@ -35,6 +35,8 @@ export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = 
 	const out = structuredClone(base) as unknown as Record<string, unknown>;
 	for (const { path } of RULE_FIELDS) {
 		const raw = form[path];
+		// A rule left out keeps its current value; one sent empty or as words is refused.
+		if (raw === undefined) continue;
 		const value = typeof raw === 'number' ? raw : typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
 		const keys = path.split('.');
 		let o = out;

@@ -6,7 +6,8 @@ export function mailSettings(): MailSettings {
 	return {
 		host: env.SMTP_HOST ?? '127.0.0.1',
 		port: Number(env.SMTP_PORT ?? 2525),
-		from: env.MAIL_FROM ?? 'Atelier Ondine <atelier@ondine.example>'
+		from: env.MAIL_FROM ?? 'Atelier Ondine <atelier@ondine.example>',
+		retryScale: Number(env.OUTBOX_RETRY_SCALE ?? 1)
 	};
 }
 

@@ -5,7 +5,7 @@ import { outbox } from '../db/schema';
 
 export type MailMessage = { to: string; subject: string; text: string; html: string; orderId?: number | null };
 
-export type MailSettings = { host: string; port: number; from: string };
+export type MailSettings = { host: string; port: number; from: string; /** shortens the retry waits (tests) */ retryScale?: number };
 
 // Retries back off from half a minute to an hour; a message is never dropped.
 const RETRY_SECONDS = [30, 60, 300, 900, 3600];
@@ -69,13 +69,13 @@ export async function deliverOne(db: Db, settings: MailSettings, id: number) {
 			await tx.update(outbox).set({ sentAt: new Date(), attempts: msg.attempts + 1, lastError: null }).where(eq(outbox.id, id));
 			return true;
 		} catch (err) {
-			const wait = RETRY_SECONDS[Math.min(msg.attempts, RETRY_SECONDS.length - 1)];
+			const wait = RETRY_SECONDS[Math.min(msg.attempts, RETRY_SECONDS.length - 1)] * (settings.retryScale ?? 1);
 			await tx
 				.update(outbox)
 				.set({
 					attempts: msg.attempts + 1,
 					lastError: String(err instanceof Error ? err.message : err).slice(0, 500),
-					nextAttemptAt: sql`DATE_ADD(CURRENT_TIMESTAMP(3), INTERVAL ${wait} SECOND)`
+					nextAttemptAt: sql`DATE_ADD(CURRENT_TIMESTAMP(3), INTERVAL ${Math.round(wait * 1e6)} MICROSECOND)`
 				})
 				.where(eq(outbox.id, id));
 			return false;

@@ -1,0 +1,184 @@
+// The skirt block: both quarter panels from the plan, darts placed and sized for the panel, side seams
+// trued against each other, and the figures a pattern cutter checks.
+import { segmentLength } from './geometry';
+import type { ResolvedMeasurements } from './measurements';
+import { dartLegs, draftPanel, type Panel, type PanelSpec } from './panel';
+import type { HouseRules } from './rules';
+import { planBlock, type BlockPlan, type PanelPlan } from './suppression';
+
+/** Both panels of the block with the plan they came from. */
+export interface Block {
+	back: Panel;
+	front: Panel;
+	plan: BlockPlan;
+	length: number;
+	hipDepth: number;
+}
+
+/** Open positions (from the shaped centre, along the waist) of a panel's darts. Scaled on small or large
+ * panels so a dart stays between 30 % and 60 % of the way to the side; two darts keep `spacing` between. */
+export function dartPositions(kind: 'front' | 'back', darts: number[], seam: number, rules: HouseRules): number[] {
+	if (!darts.length) return [];
+	const total = darts.reduce((a, b) => a + b, 0);
+	const span = seam + total;
+	const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
+	const centre = clamp(rules.darts.fromCentre[kind], 0.3 * span, 0.6 * span);
+	if (darts.length === 1) return [clamp(centre - darts[0] / 2, 0.25 * seam, 0.65 * seam) + darts[0] / 2];
+	// Two darts: positions on the closed seam (u), then opened out by the intakes before each.
+	const g = Math.min(rules.darts.spacing, 0.7 * seam);
+	let u1 = centre - total / 2 - g / 2;
+	let u2 = u1 + g;
+	if (u1 < 0.15 * seam) [u1, u2] = [0.15 * seam, 0.15 * seam + g];
+	if (u2 > 0.85 * seam) [u1, u2] = [Math.max(0.15 * seam, 0.85 * seam - g), 0.85 * seam];
+	return [u1 + darts[0] / 2, u2 + darts[0] + darts[1] / 2];
+}
+
+function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules, raise = plan.raise): PanelSpec {
+	const drop = plan.kind === 'front' ? rules.centreFrontDrop : 0;
+	// The dart point stays clear above the hip line whatever the house length.
+	const maxLength = Math.max(3, m.hipDepth - rules.darts.clearAboveHip - drop);
+	const length = Math.min(rules.darts.length[plan.kind], maxLength);
+	const at = dartPositions(plan.kind, plan.darts, plan.seam, rules);
+	return {
+		kind: plan.kind,
+		hip: plan.hip,
+		hipDepth: m.hipDepth,
+		centreShaping: plan.centre,
+		centreDrop: drop,
+		raise,
+		darts: plan.darts.map((intake, i) => ({ intake, fromCentre: at[i], length })),
+		seam: plan.seam
+	};
+}
+
+/** Side seam from waist to hem along the curve (the block hangs straight below the hip line). */
+export const blockSideSeam = (p: Panel, length: number) => segmentLength(p.hipCurve) + (length - p.spec.hipDepth);
+
+/** Drafts the block. Where the front and back side seams differ by more than the house easing, the longer
+ * seam's waist point is lowered until they agree within it (never below the waist line). */
+export function draftBlock(m: ResolvedMeasurements, rules: HouseRules, backOnFold = false): Block {
+	const plan = planBlock(m, rules, backOnFold);
+	let back = draftPanel(specOf(plan.back, m, rules));
+	let front = draftPanel(specOf(plan.front, m, rules));
+	for (let i = 0; i < 6; i++) {
+		const diff = blockSideSeam(front, m.length) - blockSideSeam(back, m.length);
+		const excess = Math.abs(diff) - rules.side.easing;
+		if (excess <= 1e-6) break;
+		const longer = diff > 0 ? front : back;
+		if (longer.spec.raise <= 1e-9) break;
+		const next = draftPanel({ ...longer.spec, raise: Math.max(0, longer.spec.raise - excess) });
+		if (diff > 0) front = next;
+		else back = next;
+	}
+	return { back, front, plan, length: m.length, hipDepth: m.hipDepth };
+}
+
+/** One dart's figures: from the centre line (after shaping) to the dart's middle, measured square to the
+ * centre line as a cutter marks it on the waist; its intake and its length. */
+export interface DartFigure {
+	fromCentre: number;
+	intake: number;
+	length: number;
+}
+
+/** Figures of one quarter panel (cm, no allowances). */
+export interface PanelFigures {
+	/** Centre line to side seam on the hip line. */
+	hipWidth: number;
+	/** Along the waist line (following its curve, each dart opening counted at its intake) from the centre
+	 * line before any shaping to the side-seam waist point: the waist mark. */
+	waistWidth: number;
+	/** Taken in at the side seam: hip width minus waist width. */
+	sideShaping: number;
+	/** Side-seam waist point above the waist line. */
+	sideRaise: number;
+	darts: DartFigure[];
+}
+
+/** The back panel's figures, with the centre back take-in. */
+export interface BackFigures extends PanelFigures {
+	centreShaping: number;
+}
+
+/** The front panel's figures, with the centre front drop. */
+export interface FrontFigures extends PanelFigures {
+	centreDrop: number;
+}
+
+/** A check a pattern cutter makes, on the front and the back panel. */
+export interface CheckPair {
+	front: number;
+	back: number;
+}
+
+/** The block's figures. In `Draft.figures` every length is rounded to the millimetre (as read from a rule);
+ * `Draft.exactFigures` has the same fields at full precision. */
+export interface Figures {
+	back: BackFigures;
+	front: FrontFigures;
+	length: number;
+	hipDepth: number;
+	hipDepthAssumed: boolean;
+	/** Circle styles: radius of the waist circle. */
+	waistRadius?: number;
+	/** Round the finished hem of the style (a full skirt's sweep). */
+	hemGirth: number;
+	check: {
+		/** Waist seam along the curve with the darts closed. */
+		waistSeam: CheckPair;
+		/** Centre line to side seam on the hip line. */
+		hipLine: CheckPair;
+		/** Waist to hem along the side seam's curve. */
+		sideSeam: CheckPair;
+		/** Longest difference between a dart's two legs (0 when they are equal). */
+		dartLegs: CheckPair;
+	};
+}
+
+function panelFigures(p: Panel): PanelFigures {
+	const darts: DartFigure[] = p.darts.map((d) => ({ fromCentre: (d.top1.x + d.top2.x) / 2 - p.centreTop.x, intake: d.intake, length: d.length }));
+	const waistWidth = (p.spec.kind === 'back' ? p.spec.centreShaping : 0) + p.spec.darts.reduce((s, d) => s + d.intake, 0) + p.waistSeam;
+	const side = p.spec.hip - waistWidth;
+	// Rounding noise of a straight-hanging panel is no shaping at all (never a flare of 1e-15 cm).
+	return { hipWidth: p.spec.hip, waistWidth, sideShaping: Math.abs(side) < 1e-9 ? 0 : side, sideRaise: p.spec.raise, darts };
+}
+
+/** The block's figures at full precision (the style adds its radius and hem girth). */
+export function blockFigures(b: Block, hipDepthAssumed: boolean): Omit<Figures, 'hemGirth'> {
+	const legs = (p: Panel) => Math.max(0, ...p.darts.map((d) => Math.abs(dartLegs(d)[0] - dartLegs(d)[1])));
+	return {
+		back: { ...panelFigures(b.back), centreShaping: b.back.spec.centreShaping },
+		front: { ...panelFigures(b.front), centreDrop: b.front.spec.centreDrop },
+		length: b.length,
+		hipDepth: b.hipDepth,
+		hipDepthAssumed,
+		check: {
+			waistSeam: { front: b.front.waistSeam, back: b.back.waistSeam },
+			hipLine: { front: b.front.hipPoint.x - b.front.centreHip.x, back: b.back.hipPoint.x - b.back.centreHip.x },
+			sideSeam: { front: blockSideSeam(b.front, b.length), back: blockSideSeam(b.back, b.length) },
+			dartLegs: { front: legs(b.front), back: legs(b.back) }
+		}
+	};
+}
+
+/** Sentences about how the block was drafted for this figure (kind about bodies, second person). */
+export function blockWarnings(b: Block, m: ResolvedMeasurements): string[] {
+	const out: string[] = [];
+	const { plan } = b;
+	const noBack = plan.back.darts.length === 0;
+	const noFront = plan.front.darts.length === 0;
+	if (m.waist > m.hip) {
+		out.push(
+			`Your waist is larger than your hip: the back darts are left out${noFront ? ', and the front darts too' : ''}. That is common, and we draft for it${plan.widened ? ': the hip line is widened to clear your waist, so the skirt hangs straight from it' : ''}.`
+		);
+	} else if (noBack || noFront) {
+		const which = noBack && noFront ? 'the darts are' : noBack ? 'the back darts are' : 'the front darts are';
+		out.push(`Your waist and hip are close in size, so ${which} left out and the side seams take the shaping.`);
+	}
+	if (plan.deepDarts) {
+		out.push(
+			'There is a large difference between your waist and hip, so the darts are deeper than usual. We advise a fitting in calico before your fabric is cut.'
+		);
+	}
+	return out;
+}

@@ -1,0 +1,67 @@
+/**
+ * Quarterline drafting engine: the skirt a pattern cutter drafts by hand, computed.
+ *
+ * How it works
+ * - Input: four measurements in cm (waist, hip, length at the side, waist-to-hip depth if known), a style
+ *   with options, and the house rules (every default overridable, merged over DEFAULT_RULES). Bad input
+ *   throws one DraftInputError naming every field with its allowed range (validateMeasurements gives the
+ *   same list without throwing); nothing returns NaN.
+ * - The block (suppression.ts, panel.ts, block.ts): quarter measures with ease, back and front balanced
+ *   about the side seam, the waist suppression shared between centre back, darts and side seam. On a
+ *   usual figure that is the house method exactly; on unusual ones the darts shrink, vanish or split into
+ *   two, the side seam never flares, and a waist larger than the hip widens the hip line. Each waist is a
+ *   cubic curve through the darts, square to the centre line and to the side seam, each dart's two sides
+ *   turned by half its angle so the waist runs on smoothly when the dart is folded shut (its cap). Then it
+ *   is trued as a cutter trues it: the side waist point moves along the waist until the waist seam,
+ *   measured along the curve with the darts closed, is exactly the intended quarter waist; and where the
+ *   front and back side seams differ by more than the house easing the longer one's waist point is lowered.
+ * - Styles (styles/*.ts) are derivations from the block: straight (a vent past the knee), pencil (taken in
+ *   at the side seams, always vented in a woven), A-line (the side-most dart closed, fully or in part, into
+ *   hem flare by rotation about its point; the side seam adds the rest), half and full circle (waist radius
+ *   = waist seam / θ), six gores (panel seams through the darts, flaring below the hip). extras.ts adds the
+ *   waistband or the facings (the waist with the darts closed), lining and pocket bags.
+ * - Pieces (pieces.ts, offset.ts, loops.ts): seam lines are closed paths of lines and cubic curves. The
+ *   cutting line is a true offset, edge by edge with its own allowance, curves fitted as curves within
+ *   0.1 mm, corners mitred or trimmed, the seam mirrored below the hem line so a hem folds up flat, and
+ *   any loop an offset makes inside a tight bend cut out. (A uniform polygon offset, such as Clipper's,
+ *   cannot give per-edge allowances or mirrored hem corners; the tests use Clipper to cross-check.)
+ * - Fabric (fabric.ts, pack.ts, columns.ts): the cutting pieces laid on the width, grain along the
+ *   selvedge, folded where a piece is cut on the fold, turned end for end only without nap. Several lays
+ *   are tried (rows "next fit" by height with pieces slid together, and columns of stacked pieces); each
+ *   can only need less length on a wider fabric, so the shortest of them can too. The lay is grown by the
+ *   shrinkage and rounded up to the sale step.
+ * - Drawings (svg.ts, svg-kit.ts): the block, the pieces or the lay as one self-contained SVG in cm, to
+ *   scale, in the house drawing conventions, its figures in cm or inches.
+ * Plain TypeScript with no framework, DOM or database import and no randomness: the shop draws in the
+ * browser and the workroom prints on the server from the same code, and a draft is always the same.
+ * Draft.figures are rounded to the millimetre; Draft.exactFigures keep full precision.
+ */
+export { draftSkirt, type Draft } from './draft';
+export { estimateFabric, type FabricEstimate, type FabricOptions, type Layout, type LayoutPiece } from './fabric';
+export { toSvg, type SvgOptions } from './svg';
+export { CM_PER_INCH, cmToIn, formatCm, formatInches, formatLength, inToCm, type Units } from './units';
+export { DEFAULT_RULES, DEFAULT_RULES_INCH, resolveRules, type FrontBack, type HouseRules, type HouseRulesInput, type SuppressionRule } from './rules';
+export {
+	DEFAULT_OPTIONS,
+	OPTION_FIELDS,
+	STYLES,
+	type Closure,
+	type OptionField,
+	type ResolvedChoice,
+	type SkirtChoice,
+	type SkirtChoiceInput,
+	type SkirtOptions,
+	type StyleId,
+	type StyleInfo,
+	type VentChoice,
+	type WaistFinish
+} from './options';
+export { DraftInputError, type FieldProblem } from './errors';
+export { MEASUREMENT_LIMITS, validateMeasurements, type Measurements, type ResolvedMeasurements } from './measurements';
+export type { BackFigures, Block, CheckPair, DartFigure, Figures, FrontFigures, PanelFigures } from './block';
+export type { DartGeom, Panel, PanelSpec } from './panel';
+export { pathProblems } from './checks';
+export type { CutInstruction, Label, Notch, Piece, PieceDart } from './pieces';
+export type { MarkLine } from './styles/common';
+export type { ClosedPath, CubicSegment, Edge, LineSegment, Point, Segment } from './geometry';
+export { circleWaistRadius } from './styles/circle';

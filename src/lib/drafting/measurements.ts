@@ -1,0 +1,108 @@
+// The shopper's four measurements: what the engine accepts, and the sentences it says about them.
+import { DraftInputError, type FieldProblem } from './errors';
+import type { HouseRules } from './rules';
+import { formatCm } from './units';
+
+/** The shopper's measurements in cm: whole-body girths, length from the waist line to the hem at the side. */
+export interface Measurements {
+	waist: number;
+	hip: number;
+	length: number;
+	/** Waist line to hip line, at the side; when missing the house default is used and said so. */
+	waistToHip?: number;
+}
+
+/** Measurements as drafted: the hip depth always known, and whether it was assumed. */
+export interface ResolvedMeasurements {
+	waist: number;
+	hip: number;
+	length: number;
+	hipDepth: number;
+	hipDepthAssumed: boolean;
+}
+
+/** Plausible input ranges (cm). Waist and hip: TRADE.md input-check ranges [from memory]; waist to hip
+ * covers the 17.5–23 cm drafting guides quote with room either side; a skirt must pass the hip line by
+ * `belowHip` and is at most `max` long. The shop's form schema mirrors these. */
+export const MEASUREMENT_LIMITS = {
+	waist: { min: 50, max: 200 },
+	hip: { min: 70, max: 200 },
+	waistToHip: { min: 10, max: 35 },
+	length: { belowHip: 5, max: 130 },
+	/** The hip may exceed the waist by at most this many cm per cm of waist-to-hip depth (a quarter of it
+	 * is 1.2 cm of shaping per cm of depth, beyond any body a skirt block is drafted for). */
+	hipOverWaistPerDepth: 4.8
+} as const;
+
+const LABEL = { waist: 'waist', hip: 'hip', length: 'skirt length', waistToHip: 'waist-to-hip depth' } as const;
+
+function numberProblem(field: keyof typeof LABEL, v: unknown, min: number, max: number): FieldProblem | null {
+	if (typeof v !== 'number' || !Number.isFinite(v)) {
+		return { field, message: `Enter your ${LABEL[field]} in centimetres, as a number.`, min, max };
+	}
+	if (v < min || v > max) {
+		return { field, message: `Your ${LABEL[field]} must be from ${min} to ${max} cm: please measure again.`, min, max };
+	}
+	return null;
+}
+
+/** Every problem with a set of measurements (an empty list means it can be drafted). */
+export function validateMeasurements(input: unknown, defaultWaistToHip = 22): FieldProblem[] {
+	const m = (typeof input === 'object' && input !== null ? input : {}) as Record<string, unknown>;
+	const L = MEASUREMENT_LIMITS;
+	const problems: FieldProblem[] = [];
+	const push = (p: FieldProblem | null) => p && problems.push(p);
+	push(numberProblem('waist', m.waist, L.waist.min, L.waist.max));
+	push(numberProblem('hip', m.hip, L.hip.min, L.hip.max));
+	let depth = defaultWaistToHip;
+	if (m.waistToHip !== undefined && m.waistToHip !== null) {
+		const p = numberProblem('waistToHip', m.waistToHip, L.waistToHip.min, L.waistToHip.max);
+		push(p);
+		if (!p) depth = m.waistToHip as number;
+	}
+	if (!problems.length && (m.hip as number) - (m.waist as number) > L.hipOverWaistPerDepth * depth + 1e-9) {
+		const max = Math.floor((m.waist as number) + L.hipOverWaistPerDepth * depth);
+		problems.push({
+			field: 'hip',
+			message: `Please check your hip and your waist-to-hip depth: a hip more than ${Math.round(L.hipOverWaistPerDepth * depth)} cm larger than the waist over ${formatCm(depth)} is more shaping than we can draft. Measure again, or ask us about a fitting.`,
+			max
+		});
+	}
+	const minLength = Math.ceil(depth + L.length.belowHip);
+	const lp = numberProblem('length', m.length, minLength, L.length.max);
+	if (lp && typeof m.length === 'number' && Number.isFinite(m.length) && m.length < minLength) {
+		lp.message = `Your skirt length must reach at least ${L.length.belowHip} cm below your hip line: ${minLength} cm or more.`;
+	}
+	push(lp);
+	return problems;
+}
+
+/** Checks and completes the measurements; throws DraftInputError naming each bad field. */
+export function resolveMeasurements(input: unknown, rules: HouseRules): ResolvedMeasurements {
+	const problems = validateMeasurements(input, rules.defaultWaistToHip);
+	if (problems.length) throw new DraftInputError(problems);
+	const m = input as Measurements;
+	const known = typeof m.waistToHip === 'number';
+	return { waist: m.waist, hip: m.hip, length: m.length, hipDepth: known ? (m.waistToHip as number) : rules.defaultWaistToHip, hipDepthAssumed: !known };
+}
+
+/** Sentences about the measurements themselves: an assumed hip depth, values near the edges of the range. */
+export function measurementWarnings(m: ResolvedMeasurements): string[] {
+	const out: string[] = [];
+	if (m.hipDepthAssumed) {
+		out.push(
+			`You did not give your waist-to-hip depth, so we used ${formatCm(m.hipDepth)}, a usual figure. For a closer fit, measure down your side from your waist to the fullest part of your hip.`
+		);
+	}
+	const near = (field: 'waist' | 'hip' | 'waistToHip', v: number) => {
+		const { min, max } = MEASUREMENT_LIMITS[field];
+		const margin = (max - min) * 0.04;
+		const name = LABEL[field];
+		if (v < min + margin) out.push(`Please check your ${name}: ${formatCm(v)} is close to the smallest we draft (${min} cm). If it is right, we draft for it as it is.`);
+		else if (v > max - margin) out.push(`Please check your ${name}: ${formatCm(v)} is close to the largest we draft (${max} cm). If it is right, we draft for it as it is.`);
+	};
+	near('waist', m.waist);
+	near('hip', m.hip);
+	if (!m.hipDepthAssumed) near('waistToHip', m.hipDepth);
+	return out;
+}

@@ -1,0 +1,161 @@
+// One quarter panel of the block, drawn as a cutter draws it: centre line, waist curve through the darts,
+// side seam curving from the raised side waist point into the hip line. Then trued: the waist seam,
+// measured along the curve with the darts closed, is brought to exactly the intended quarter waist by
+// moving the side waist point along the waist line (as a cutter takes a little off at the side).
+import {
+	P,
+	add,
+	cubic,
+	dist,
+	hermite,
+	line,
+	pointAt,
+	rotate,
+	segmentLength,
+	sub,
+	tangentAt,
+	unit,
+	type CubicSegment,
+	type Point,
+	type Segment
+} from './geometry';
+
+/** A dart as drawn: two legs of equal length from the waist to the point, and the cap across its top. */
+export interface DartGeom {
+	/** Leg top nearer the centre line. */
+	top1: Point;
+	/** Leg top nearer the side seam. */
+	top2: Point;
+	point: Point;
+	/** Peak of the waist across the dart: folded shut, the waist runs on smoothly. */
+	cap: Point;
+	intake: number;
+	length: number;
+}
+
+/** What a panel is drafted from (cm; x from the centre line, y down from the waist line). */
+export interface PanelSpec {
+	kind: 'front' | 'back';
+	hip: number;
+	hipDepth: number;
+	/** Back: centre taken in at the waist, ruled to the hip line. */
+	centreShaping: number;
+	/** Front: centre waist dropped below the waist line. */
+	centreDrop: number;
+	raise: number;
+	darts: { intake: number; fromCentre: number; length: number }[];
+	/** The waist seam this panel must measure with its darts closed. */
+	seam: number;
+}
+
+/** A drafted quarter panel above the hip line (below it each style goes its own way). */
+export interface Panel {
+	spec: PanelSpec;
+	centreTop: Point;
+	centreHip: Point;
+	/** The waist seam in parts: centre to first dart, between darts, last dart to the side. */
+	waistParts: CubicSegment[][];
+	darts: DartGeom[];
+	sideTop: Point;
+	hipPoint: Point;
+	/** Side seam from the side waist point into the hip line. */
+	hipCurve: CubicSegment;
+	waistSeam: number;
+}
+
+/** x(t) of a cubic is monotone here (all handles point right): find t for a given x by bisection. */
+function paramAtX(s: CubicSegment, x: number): number {
+	let lo = 0;
+	let hi = 1;
+	for (let i = 0; i < 34; i++) {
+		const m = (lo + hi) / 2;
+		if (pointAt(s, m).x < x) lo = m;
+		else hi = m;
+	}
+	return (lo + hi) / 2;
+}
+
+/** Handle at the side waist point: short enough that the waist does not dip below the line it rises from. */
+function endHandle(from: Point, S: Point, tS: Point): number {
+	const chord = dist(from, S) / 3;
+	const sin = -tS.y;
+	const rise = Math.max(0, from.y - S.y);
+	return sin > 1e-6 ? Math.max(0.1 * chord, Math.min(chord, (0.8 * rise) / sin)) : chord;
+}
+
+function buildAt(spec: PanelSpec, sideX: number): Panel {
+	const d = spec.hipDepth;
+	const back = spec.kind === 'back';
+	const C = back ? P(spec.centreShaping, 0) : P(0, spec.centreDrop);
+	const centreDir = back ? unit(P(-spec.centreShaping, d)) : P(0, 1);
+	// The waist leaves the centre line square to it, so the pair of panels meets without a point or a dip.
+	const tC = P(centreDir.y, -centreDir.x);
+	const S = P(sideX, -spec.raise);
+	const H = P(spec.hip, d);
+	const drop = d + spec.raise;
+	const shaping = Math.max(0, spec.hip - sideX);
+	const u = shaping < 1e-9 ? P(0, 1) : unit(P(shaping, drop));
+	// Waist and side seam meet square, so front and back join into one smooth waist at the side.
+	const tS = P(u.y, -u.x);
+	const base = hermite(C, tC, S, tS, 'waist', dist(C, S) / 3, endHandle(C, S, tS));
+	const darts: DartGeom[] = [];
+	const parts: CubicSegment[][] = [];
+	let start = C;
+	let startDir = tC;
+	for (const dart of spec.darts) {
+		const t = paramAtX(base, C.x + dart.fromCentre);
+		const M = pointAt(base, t);
+		const tM = tangentAt(base, t);
+		const half = dart.intake / 2;
+		const point = P(M.x, M.y + dart.length);
+		const beta = Math.atan2(half, dart.length);
+		const top1 = P(M.x - half, M.y);
+		const top2 = P(M.x + half, M.y);
+		// Each side of the dart is turned by half its angle, so folding it shut lines the two tangents up.
+		const leftDir = rotate(tM, -beta);
+		const rightDir = rotate(tM, beta);
+		const capY = (top1.y + (leftDir.y / leftDir.x) * half + top2.y - (rightDir.y / rightDir.x) * half) / 2;
+		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: dart.length });
+		parts.push([hermite(start, startDir, top1, leftDir, 'waist')]);
+		start = top2;
+		startDir = rightDir;
+	}
+	parts.push([hermite(start, startDir, S, tS, 'waist', dist(start, S) / 3, endHandle(start, S, tS))]);
+	const hipCurve = cubic(S, add(S, P((u.x / u.y) * 0.4 * drop, 0.4 * drop)), sub(H, P(0, 0.35 * drop)), H, 'side');
+	const waistSeam = parts.flat().reduce((sum, s) => sum + segmentLength(s), 0);
+	return { spec, centreTop: C, centreHip: P(0, d), waistParts: parts, darts, sideTop: S, hipPoint: H, hipCurve, waistSeam };
+}
+
+/** Drafts the panel and trues its waist seam to spec.seam (secant steps on the side waist point). */
+export function draftPanel(spec: PanelSpec): Panel {
+	const total = spec.darts.reduce((s, d) => s + d.intake, 0);
+	let x0 = (spec.kind === 'back' ? spec.centreShaping : 0) + total + spec.seam;
+	let p0 = buildAt(spec, x0);
+	let e0 = p0.waistSeam - spec.seam;
+	let x1 = x0 - e0;
+	for (let i = 0; i < 30 && Math.abs(e0) > 1e-10; i++) {
+		const p1 = buildAt(spec, x1);
+		const e1 = p1.waistSeam - spec.seam;
+		const slope = Math.abs(x1 - x0) > 1e-14 ? (e1 - e0) / (x1 - x0) : 1;
+		[x0, p0, e0] = [x1, p1, e1];
+		x1 = x0 - e0 / (slope > 0.2 ? slope : 1);
+	}
+	return p0;
+}
+
+/** The waist line as drawn on the pattern: the seam parts joined across each dart by its cap. */
+export function waistWithCaps(panel: Pick<Panel, 'waistParts' | 'darts'>): Segment[] {
+	const out: Segment[] = [];
+	panel.waistParts.forEach((part, i) => {
+		out.push(...part);
+		const d = panel.darts[i];
+		if (d) out.push(line(d.top1, d.cap, 'dart-cap'), line(d.cap, d.top2, 'dart-cap'));
+	});
+	return out;
+}
+
+/** Length of the waist seam with the darts closed (the parts between the darts, end to end). */
+export const closedWaistLength = (parts: Segment[][]) => parts.flat().reduce((s, x) => s + segmentLength(x), 0);
+
+/** Leg lengths of a dart (equal by construction; measured so the checks can say so). */
+export const dartLegs = (d: DartGeom) => [dist(d.top1, d.point), dist(d.top2, d.point)];

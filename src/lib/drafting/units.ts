@@ -1,0 +1,38 @@
+// Centimetres inside, the shopper's units outside. An inch is exactly 2.54 cm (international yard and
+// pound agreement, 1959); shops working in inches read tapes to the nearest eighth.
+
+/** Units a drawing or figure is shown in. */
+export type Units = 'cm' | 'in';
+
+/** Exactly, by definition. */
+export const CM_PER_INCH = 2.54;
+
+/** Centimetres to inches, full precision. */
+export const cmToIn = (cm: number): number => cm / CM_PER_INCH;
+/** Inches to centimetres, full precision. */
+export const inToCm = (inches: number): number => inches * CM_PER_INCH;
+
+const EIGHTHS = ['', '⅛', '¼', '⅜', '½', '⅝', '¾', '⅞'];
+
+/** Inches to the nearest ⅛, as a tape reads: 26.35 cm → "10⅜″". */
+export function formatInches(cm: number): string {
+	const eighths = Math.round(cmToIn(Math.abs(cm)) * 8);
+	const whole = Math.floor(eighths / 8);
+	const frac = EIGHTHS[eighths % 8];
+	const sign = cm < 0 && eighths > 0 ? '−' : '';
+	return `${sign}${whole > 0 || !frac ? whole : ''}${frac}″`;
+}
+
+/** Centimetres to the nearest millimetre, without a trailing ".0": 25.5 → "25.5 cm", 32 → "32 cm". */
+export function formatCm(cm: number): string {
+	const mm = Math.round(cm * 10);
+	const sign = mm < 0 ? '−' : '';
+	const a = Math.abs(mm);
+	return `${sign}${Math.floor(a / 10)}${a % 10 ? `.${a % 10}` : ''} cm`;
+}
+
+/** A length in the shopper's units. */
+export const formatLength = (cm: number, units: Units = 'cm'): string => (units === 'in' ? formatInches(cm) : formatCm(cm));
+
+/** Rounds to the millimetre, the precision a cutter reads from a rule (and never gives −0). */
+export const toMm = (cm: number): number => Math.round(cm * 10) / 10 + 0;

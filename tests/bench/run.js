@@ -1,0 +1,139 @@
+// @ts-check
+// `npm run bench`: a benchmark, not a test. It starts a system of its own (fresh MariaDB, the fakes,
+// a fresh build of the app on free ports), runs each measure after a warm-up, prints one table and
+// writes bench.json. Every figure sits beside a floor measured in the same run on the same machine,
+// so the ratio says more than the raw number on a busy computer. It never fails on speed: the exit
+// code is non-zero only when the bench itself could not run.
+import { spawn } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import os from 'node:os';
+import { join } from 'node:path';
+import { ensureDebianPackages, ensurePackages, onShutdown, step, done, ROOT } from '../../fakes/stack/bootstrap.js';
+import { printTable, rowsFrom } from './report.js';
+
+/** @type {null | { stop: (o?: { keep?: boolean }) => Promise<void> }} */
+let stack = null;
+let stopped = false;
+async function stopStack() {
+	if (stack && !stopped) {
+		stopped = true;
+		step('Stopping the bench system');
+		await stack.stop();
+		done();
+	}
+}
+onShutdown(stopStack);
+
+/** Runs the in-process engine measures in a child (TypeScript through tsx) and parses its JSON line. */
+function draftBench() {
+	return new Promise((resolve, reject) => {
+		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+		let out = '';
+		let err = '';
+		child.stdout.on('data', (c) => (out += c));
+		child.stderr.on('data', (c) => (err += c));
+		const timer = setTimeout(() => child.kill('SIGTERM'), 150_000);
+		child.on('close', (code) => {
+			clearTimeout(timer);
+			const line = out.trim().split('\n').at(-1) ?? '';
+			if (code !== 0) return reject(new Error(`tests/bench/draft.ts exited ${code}: ${err.slice(-2000)}`));
+			try {
+				resolve(JSON.parse(line));
+			} catch {
+				reject(new Error(`tests/bench/draft.ts printed no JSON: ${out.slice(-500)}`));
+			}
+		});
+	});
+}
+
+/** @param {string} name @param {() => Promise<any>} fn */
+async function measure(name, fn) {
+	step(name);
+	try {
+		const r = await fn();
+		done();
+		return r;
+	} catch (e) {
+		console.log(`  not measured: ${e instanceof Error ? e.message : e}`);
+		return { error: e instanceof Error ? e.message : String(e) };
+	}
+}
+
+async function main() {
+	const startedAt = new Date();
+	const loadBefore = os.loadavg();
+	ensurePackages();
+	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'] });
+	// npm packages only after ensurePackages has put them in place.
+	const { startStack } = await import('../../fakes/stack/stack.js');
+	const { measureQuote } = await import('./http.js');
+	const { measureTicket, TICKET_ROUTE } = await import('./ticket.js');
+	const { measureCheckout } = await import('./checkout.js');
+	const { measurePages, compareWithHtml } = await import('./pages.js');
+	const mysql = (await import('mysql2/promise')).default;
+
+	const s = await startStack({ name: 'bench' });
+	stack = s;
+	const env = s.testEnv;
+
+	// The engine alone first, while the app sits idle.
+	const draft = await measure('draft: in-process engine timings (tsx)', draftBench);
+
+	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
+		const p = await measurePages(env.QL_BUILD_DIR);
+		// Cross-check on two public pages: the files their HTML names are exactly the ones counted.
+		/** @type {Record<string, unknown>} */
+		const htmlCheck = {};
+		for (const [route, path] of [['/', '/'], ['/styles/[slug]/make', '/styles/rue-straight/make']]) {
+			const r = p.routes[route];
+			if (!r || 'missing' in r) continue;
+			const res = await fetch(`${env.APP_URL}${path}`);
+			htmlCheck[path] = res.ok ? compareWithHtml(await res.text(), r.files) : { agree: false, status: res.status };
+		}
+		return { ...p, htmlCheck };
+	});
+
+	const quote = await measure('quote API: POST /api/quote vs GET /healthz, 32 connections, 10 s each', () => measureQuote({ appUrl: env.APP_URL }));
+
+	const ticket = await measure('ticket PDF: GET as the cutter vs a one-page pdfkit document', async () => {
+		const db = await mysql.createConnection({ uri: env.DATABASE_URL });
+		try {
+			const [rows] = /** @type {any} */ (await db.query("SELECT id, number FROM `order` WHERE status IN ('cutting', 'paid') ORDER BY status = 'cutting' DESC, id LIMIT 1"));
+			if (!rows.length) throw new Error('no paid or cutting order in the seed');
+			const routeMissing = !('routeIds' in pages) || !pages.routeIds.includes(TICKET_ROUTE);
+			return { number: rows[0].number, ...(await measureTicket({ appUrl: env.APP_URL, orderId: rows[0].id, routeMissing })) };
+		} finally {
+			await db.end();
+		}
+	});
+
+	const checkout = await measure('checkout: 500 orders by 50 clients, quote → order → pay → webhook', () =>
+		measureCheckout({ appUrl: env.APP_URL, paymentsUrl: env.PAYMENTS_URL, databaseUrl: env.DATABASE_URL, runTag: Date.now().toString(36) })
+	);
+
+	const raw = { draft, quote, ticket, checkout, pages };
+	const rows = rowsFrom(raw);
+	const report = {
+		startedAt: startedAt.toISOString(),
+		finishedAt: new Date().toISOString(),
+		node: process.version,
+		machine: { cpus: os.cpus().length, model: os.cpus()[0]?.model ?? '', loadavgBefore: loadBefore, loadavgAfter: os.loadavg() },
+		rows,
+		raw: { ...raw, pages: 'error' in pages ? pages : { ...pages, routes: Object.fromEntries(Object.entries(pages.routes).map(([k, v]) => [k, { ...v, files: undefined }])), floor: { ...pages.floor, files: undefined } } }
+	};
+	writeFileSync(join(ROOT, 'bench.json'), `${JSON.stringify(report, null, 2)}\n`);
+	printTable(rows, report);
+	console.log(`\nbench.json written (${rows.length} rows). A benchmark, not a test: figures are never asserted.`);
+	return Object.values(raw).some((r) => r && typeof r === 'object' && 'error' in r) ? 1 : 0;
+}
+
+let code = 0;
+try {
+	code = await main();
+} catch (err) {
+	console.error(`\nnpm run bench could not run: ${err instanceof Error ? err.message : err}`);
+	code = 1;
+} finally {
+	await stopStack();
+}
+process.exit(code);
