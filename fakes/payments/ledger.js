@@ -280,8 +280,9 @@ export function createLedger({ publicUrl, emit }) {
 			const currency = String(p.currency ?? 'eur').toLowerCase();
 			const metadata = p.metadata ?? {};
 			charges.set(chId, { id: chId, object: 'charge', amount: p.amount, amount_captured: p.amount, amount_refunded: refunded, captured: true, created, currency, livemode: false, metadata, paid: true, payment_intent: p.id, receipt_email: p.email ?? null, refunded: refunded >= p.amount, refunds: { object: 'list', data: [], has_more: false }, status: 'succeeded' });
-			intents.set(p.id, { id: p.id, object: 'payment_intent', amount: p.amount, amount_received: p.amount, capture_method: 'automatic', created, currency, latest_charge: chId, livemode: false, metadata, status: 'succeeded' });
-			return copy(intents.get(p.id));
+			const intent = { id: p.id, object: 'payment_intent', amount: p.amount, amount_received: p.amount, capture_method: 'automatic', created, currency, latest_charge: chId, livemode: false, metadata, status: 'succeeded' };
+			intents.set(p.id, intent);
+			return copy(intent);
 		},
 
 		/** @param {string} id */

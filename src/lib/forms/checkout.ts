@@ -28,8 +28,13 @@ export const checkoutSchema = z.object({
 	line2: z.string().trim().max(160).default(''),
 	city: text('town or city', 80),
 	postcode: text('postcode', 20),
-	country: z.enum(COUNTRIES.map(([c]) => c) as [string, ...string[]], { error: 'Choose the country we ship to.' }),
-	// Body measurements are personal data: drafting from them needs her explicit agreement.
-	measurementConsent: z.literal(true, { error: 'We need your agreement to draft from your measurements.' }),
-	madeToMeasure: z.literal(true, { error: 'Please confirm you have read how returns work for made-to-measure skirts.' })
+	// Empty until she chooses: no country is assumed for her.
+	country: z
+		.string()
+		.default('')
+		.refine((c) => COUNTRIES.some(([code]) => code === c), 'Choose the country we ship to.'),
+	// Body measurements are personal data: drafting from them needs her explicit agreement, so the
+	// boxes start unticked.
+	measurementConsent: z.boolean().default(false).refine(Boolean, 'We need your agreement to draft from your measurements.'),
+	madeToMeasure: z.boolean().default(false).refine(Boolean, 'Please confirm you have read how returns work for made-to-measure skirts.')
 });
