@@ -31,7 +31,7 @@ export function getPath(obj: unknown, path: string): unknown {
 }
 
 /** Rules from a posted form: every listed field as a number, over the given base (unlisted rules kept). */
-export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = DEFAULT_RULES): Record<string, unknown> {
+export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = DEFAULT_RULES): HouseRules {
 	const out = structuredClone(base) as unknown as Record<string, unknown>;
 	for (const { path } of RULE_FIELDS) {
 		const raw = form[path];
@@ -43,5 +43,6 @@ export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = 
 		for (const k of keys.slice(0, -1)) o = o[k] as Record<string, unknown>;
 		o[keys.at(-1)!] = value;
 	}
-	return out;
+	// Checked by resolveRules before any use: a value out of range is refused there, field by field.
+	return out as unknown as HouseRules;
 }

@@ -1,7 +1,7 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, toSvg } from '../../drafting';
+import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '../../drafting';
 import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
 import { OPEN_WORK_STAGES } from '../../orders/stages';
 import { priceLine, promisedShipDate, shippingCost } from '../../pricing';
@@ -31,7 +31,7 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 
 	let draft;
 	try {
-		draft = draftSkirt(input.measurements, { style: style.kind, ...input.options, stretch: fabric?.stretch ?? false } as never, rules);
+		draft = draftSkirt(input.measurements, { style: style.kind as StyleId, ...input.options, stretch: fabric?.stretch ?? false }, rules);
 	} catch (err) {
 		if (err instanceof DraftInputError) {
 			const fields: Record<string, string[]> = {};

@@ -1,4 +1,4 @@
-import { draftSkirt, toSvg } from '../../drafting';
+import { draftSkirt, toSvg, type StyleId } from '../../drafting';
 import type { HouseRules } from '../../drafting/rules';
 
 // The figure every style is drawn on in the catalogue: the handbook size 12 (waist 68, hip 94,
@@ -12,7 +12,7 @@ export function sampleDrawing(kind: string, rules: HouseRules, rulesId: number, 
 	const key = `${kind}:${rulesId}:${view}`;
 	let svg = cache.get(key);
 	if (!svg) {
-		svg = toSvg(draftSkirt(SAMPLE_FIGURE, { style: kind } as never, rules), { view, units: 'cm' });
+		svg = toSvg(draftSkirt(SAMPLE_FIGURE, { style: kind as StyleId }, rules), { view, units: 'cm' });
 		cache.set(key, svg);
 	}
 	return svg;

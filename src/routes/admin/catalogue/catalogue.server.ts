@@ -2,8 +2,8 @@
 import { and, asc, eq, isNotNull, isNull, like, ne, or } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { fabrics, styles, type StyleOptionPrices } from '$lib/server/db/schema';
-import { centsToText, numberToText, parseScaled, slugify } from './amounts';
-import type { FabricForm, StyleForm } from './forms';
+import { centsToText, numberToText, parseScaled, slugify } from '$lib/catalogue/amounts';
+import type { FabricForm, StyleForm } from '$lib/forms/catalogue';
 
 // Only called on a valid form, where every figure has been checked by amountProblem.
 const scaled = (text: string, decimals: number) => parseScaled(text, decimals)!;

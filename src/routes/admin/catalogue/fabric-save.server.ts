@@ -8,7 +8,7 @@ import { db } from '$lib/server/db';
 import { fabrics } from '$lib/server/db/schema';
 import { acceptSwatch, discardUpload, tooLarge } from '$lib/server/uploads';
 import { fabricFormData, fabricValues, newFabricSlug } from './catalogue.server';
-import { fabricSchema, MAX_SWATCH_BYTES } from './forms';
+import { fabricSchema, MAX_SWATCH_BYTES } from '$lib/forms/catalogue';
 
 type Fabric = typeof fabrics.$inferSelect;
 

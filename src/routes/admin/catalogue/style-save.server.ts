@@ -5,7 +5,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { styles } from '$lib/server/db/schema';
 import { styleSlugTaken, styleValues } from './catalogue.server';
-import { styleSchema } from './forms';
+import { styleSchema } from '$lib/forms/catalogue';
 
 function isDuplicate(e: unknown): boolean {
 	for (let c: unknown = e; c && typeof c === 'object'; c = (c as { cause?: unknown }).cause) {

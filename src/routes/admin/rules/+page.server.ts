@@ -31,7 +31,7 @@ export const actions: Actions = {
 		const { rules: base } = await currentRules(db);
 		let rules;
 		try {
-			rules = resolveRules(rulesFromForm(form, base) as never);
+			rules = resolveRules(rulesFromForm(form, base));
 		} catch (err) {
 			if (err instanceof DraftInputError) return fail(400, { message: 'Some rules are out of range.', errors: Object.fromEntries(err.fields.map((f) => [f.field.replace(/^rules\./, ''), f.message])) });
 			throw err;

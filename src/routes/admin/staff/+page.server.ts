@@ -3,7 +3,7 @@ import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
-import { inviteSchema } from './forms';
+import { inviteSchema } from '$lib/forms/staff';
 import { inviteCutter } from './invite.server';
 import type { Actions, PageServerLoad } from './$types';
 

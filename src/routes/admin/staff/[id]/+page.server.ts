@@ -4,7 +4,7 @@ import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { sessions, users, verificationTokens } from '$lib/server/db/schema';
-import { roleSchema, ROLE_CHOICES } from '../forms';
+import { roleSchema, ROLE_CHOICES } from '$lib/forms/staff';
 import type { Actions, PageServerLoad } from './$types';
 
 async function accountFor(id: string) {

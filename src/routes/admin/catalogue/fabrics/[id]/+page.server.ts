@@ -4,7 +4,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { fabrics } from '$lib/server/db/schema';
-import { fabricSchema } from '../../forms';
+import { fabricSchema } from '$lib/forms/catalogue';
 import { fabricFormData, idParam } from '../../catalogue.server';
 import { saveFabric } from '../../fabric-save.server';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,6 +1,6 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { fabricSchema } from '../../forms';
+import { fabricSchema } from '$lib/forms/catalogue';
 import { saveFabric } from '../../fabric-save.server';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -4,7 +4,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { styles } from '$lib/server/db/schema';
-import { styleSchema } from '../../forms';
+import { styleSchema } from '$lib/forms/catalogue';
 import { idParam, styleFormData } from '../../catalogue.server';
 import { saveStyle } from '../../style-save.server';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,6 +1,6 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { styleSchema } from '../../forms';
+import { styleSchema } from '$lib/forms/catalogue';
 import { saveStyle } from '../../style-save.server';
 import type { Actions, PageServerLoad } from './$types';
 

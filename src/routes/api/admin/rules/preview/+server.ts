@@ -1,10 +1,9 @@
 import { json } from '@sveltejs/kit';
-import { DraftInputError, resolveRules } from '$lib/drafting';
+import { DraftInputError, draftSkirt, resolveRules, toSvg } from '$lib/drafting';
 import { rulesFromForm } from '$lib/server/admin/rules-form';
 import { db } from '$lib/server/db';
 import { currentRules } from '$lib/server/shop/rules';
 import { SAMPLE_FIGURE } from '$lib/server/shop/sample';
-import { draftSkirt, toSvg } from '$lib/drafting';
 import type { RequestHandler } from './$types';
 
 // The house-rules page's live sample drawing: draws the sample figure with the rules being edited.
@@ -12,7 +11,7 @@ export const POST: RequestHandler = async ({ request }) => {
 	const body = await request.json().catch(() => null);
 	if (!body || typeof body !== 'object') return json({ message: 'Send the rules as JSON.' }, { status: 400 });
 	try {
-		const rules = resolveRules(rulesFromForm(body as Record<string, unknown>, (await currentRules(db)).rules) as never);
+		const rules = resolveRules(rulesFromForm(body as Record<string, unknown>, (await currentRules(db)).rules));
 		const draft = draftSkirt(SAMPLE_FIGURE, { style: 'straight' }, rules);
 		return json({ svg: toSvg(draft, { view: 'block', units: 'cm' }), figures: draft.figures, warnings: draft.warnings });
 	} catch (err) {

@@ -3,8 +3,8 @@
 // (see amounts.ts) into the cents and centimetres the database keeps.
 import { z } from 'zod';
 import { STYLES, type StyleId } from '$lib/drafting/options';
-import { amountProblem, type AmountRule } from './amounts';
-import { fibreProblem } from './fibre';
+import { amountProblem, type AmountRule } from '../catalogue/amounts';
+import { fibreProblem } from '../catalogue/fibre';
 
 // Strings carry no .default(): zod 4 returns a default without checking it, so a field left out of a
 // post would slip past its rules (superforms fills the empty string in, which is then checked).
