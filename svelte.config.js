@@ -5,6 +5,8 @@ import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 const config = {
 	preprocess: vitePreprocess(),
 	kit: {
+		// npm test and npm run bench build into folders of their own, so two builds never clash.
+		outDir: process.env.QL_KIT_DIR ?? '.svelte-kit',
 		// Tests build into their own folder so they can run beside a running npm start.
 		adapter: adapter({ out: process.env.QL_BUILD_DIR ?? 'build' }),
 		// The shop sends no request off the machine: fonts, scripts and images are all ours.

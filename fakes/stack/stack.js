@@ -53,7 +53,7 @@ export async function startStack(opts) {
 
 		const buildDir = join(work, 'build');
 		step('Building the app');
-		run('npx', ['vite', 'build', '--logLevel', 'error'], { quiet: true, env: { QL_BUILD_DIR: buildDir } });
+		run('npx', ['vite', 'build', '--logLevel', 'error'], { quiet: true, env: { QL_BUILD_DIR: buildDir, QL_KIT_DIR: join(work, 'kit') } });
 		done();
 
 		step('Starting the fakes and the app on free ports');

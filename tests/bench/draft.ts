@@ -7,7 +7,17 @@
 // and puts the floor under exactly the same warm-up, GC and CPU conditions as the full call.
 // The reference figure is the engine author's (src/lib/drafting/bench.ts); then 10 000 random valid
 // figures across every style and option, from a seeded PRNG so two runs do the same work.
-import { DraftInputError, STYLES, draftSkirt, estimateFabric, toSvg, validateMeasurements, type FabricOptions, type Measurements, type SkirtChoiceInput } from '../../src/lib/drafting';
+import {
+	DraftInputError,
+	STYLES,
+	draftSkirt,
+	estimateFabric,
+	toSvg,
+	validateMeasurements,
+	type FabricOptions,
+	type Measurements,
+	type SkirtChoiceInput
+} from '../../src/lib/drafting';
 import { benchDraft } from '../../src/lib/drafting/bench';
 import { DEMO_FABRICS } from '../../src/lib/server/seed/catalogue';
 import { summarise } from './stats.js';
@@ -61,7 +71,11 @@ function collect(parts: Parts[]) {
 }
 
 // The reference figure and fabric of src/lib/drafting/bench.ts, so both benches time the same skirt.
-const reference: Job = { m: { waist: 68, hip: 94, length: 58.5, waistToHip: 20.6 }, choice: {}, fabric: { width: 150, nap: false, shrinkage: 3 } };
+const reference: Job = {
+	m: { waist: 68, hip: 94, length: 58.5, waistToHip: 20.6 },
+	choice: {},
+	fabric: { width: 150, nap: false, shrinkage: 3 }
+};
 
 function single() {
 	for (let i = 0; i < 300; i++) timed(reference);
@@ -123,7 +137,11 @@ console.log(
 			generatedRejected: rejected,
 			styles: STYLES.map((x) => x.id),
 			wallSeconds,
-			totalSeconds: { full: sum(randomParts.map((p) => p.draft + p.estimate + p.svg)), noSvg: sum(randomParts.map((p) => p.draft + p.estimate)), floor: sum(randomParts.map((p) => p.draft)) },
+			totalSeconds: {
+				full: sum(randomParts.map((p) => p.draft + p.estimate + p.svg)),
+				noSvg: sum(randomParts.map((p) => p.draft + p.estimate)),
+				floor: sum(randomParts.map((p) => p.draft))
+			},
 			...collect(randomParts)
 		},
 		engineBench: engine,

@@ -21,7 +21,9 @@ export function load(o) {
 				duration: o.seconds,
 				pipelining: 1,
 				timeout: 10,
-				...(o.requests ? { requests: o.requests } : { method: /** @type {any} */ (o.method ?? 'GET'), headers: o.headers, body: o.body })
+				...(o.requests
+					? { requests: o.requests }
+					: { method: /** @type {any} */ (o.method ?? 'GET'), headers: o.headers, body: o.body })
 			},
 			(err, result) => {
 				if (err) return reject(err);
@@ -45,7 +47,13 @@ export function load(o) {
 					errors: result.errors,
 					timeouts: result.timeouts,
 					// autocannon's own figures, for comparison with ours
-					autocannon: { p50: result.latency.p50, p90: result.latency.p90, p97_5: result.latency.p97_5, reqPerSecAvg: result.requests.average, non2xx: result.non2xx }
+					autocannon: {
+						p50: result.latency.p50,
+						p90: result.latency.p90,
+						p97_5: result.latency.p97_5,
+						reqPerSecAvg: result.requests.average,
+						non2xx: result.non2xx
+					}
 				});
 			}
 		);
@@ -58,8 +66,19 @@ export function load(o) {
 
 /** The quote bodies the load cycles through: every demo style in turn, on the 150 cm wool twill. */
 export function quoteBodies() {
-	const styles = ['rue-straight', 'quill-pencil', 'meadow-a-line', 'swing-half-circle', 'carousel-full-circle', 'promenade-six-gore'];
-	return styles.map((style, i) => ({ measurements: { waist: 66 + i * 2, hip: 92 + i * 2, length: 58 + i, waistToHip: 20.5 }, style, fabricId: 1 }));
+	const styles = [
+		'rue-straight',
+		'quill-pencil',
+		'meadow-a-line',
+		'swing-half-circle',
+		'carousel-full-circle',
+		'promenade-six-gore'
+	];
+	return styles.map((style, i) => ({
+		measurements: { waist: 66 + i * 2, hip: 92 + i * 2, length: 58 + i, waistToHip: 20.5 },
+		style,
+		fabricId: 1
+	}));
 }
 
 /**
@@ -73,11 +92,21 @@ export async function measureQuote(o) {
 	const bodies = quoteBodies();
 	// One real answer first: a benchmark of refusals would be worthless.
 	for (const b of bodies) {
-		const res = await fetch(`${o.appUrl}/api/quote`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(b) });
+		const res = await fetch(`${o.appUrl}/api/quote`, {
+			method: 'POST',
+			headers: { 'content-type': 'application/json' },
+			body: JSON.stringify(b)
+		});
 		const json = await res.json().catch(() => null);
-		if (res.status !== 200 || !json?.price?.total || !json?.drawing) throw new Error(`POST /api/quote for ${b.style} answered ${res.status}: ${JSON.stringify(json).slice(0, 300)}`);
+		if (res.status !== 200 || !json?.price?.total || !json?.drawing)
+			throw new Error(`POST /api/quote for ${b.style} answered ${res.status}: ${JSON.stringify(json).slice(0, 300)}`);
 	}
-	const requests = bodies.map((b) => ({ method: /** @type {const} */ ('POST'), path: '/api/quote', headers: { 'content-type': 'application/json' }, body: JSON.stringify(b) }));
+	const requests = bodies.map((b) => ({
+		method: /** @type {const} */ ('POST'),
+		path: '/api/quote',
+		headers: { 'content-type': 'application/json' },
+		body: JSON.stringify(b)
+	}));
 	const quote = { url: `${o.appUrl}/api/quote`, connections, requests };
 	const health = { url: `${o.appUrl}/healthz`, connections };
 	await load({ ...quote, seconds: warm });

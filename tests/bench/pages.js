@@ -2,7 +2,7 @@
 // What each page sends to the browser on first load, from the build the bench started (QL_BUILD_DIR):
 // the start and app entries every page needs, plus each layout's and the page's own node with the
 // chunks they import, as SvelteKit lists them in the server's copy of the client manifest (these are
-// the files the page's HTML names with <link rel="modulepreload"> and <link rel="stylesheet">). Sizes
+// the files a page names in its HTML and in the Link preload header SvelteKit sends with it). Sizes
 // are those of the .gz files adapter-node precompressed, i.e. the bytes sent to a browser that accepts
 // gzip; a file without one is gzipped here at level 9. Fonts load on demand and are not counted.
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
@@ -11,7 +11,17 @@ import { pathToFileURL } from 'node:url';
 import { gzipSync } from 'node:zlib';
 
 /** The routes the bench reports, with a real path for the cross-check against served HTML. */
-export const PAGE_ROUTES = ['/', '/styles/[slug]', '/styles/[slug]/make', '/bag', '/checkout', '/orders/[number]', '/workroom', '/admin', '/signin/check-mail'];
+export const PAGE_ROUTES = [
+	'/',
+	'/styles/[slug]',
+	'/styles/[slug]/make',
+	'/bag',
+	'/checkout',
+	'/orders/[number]',
+	'/workroom',
+	'/admin',
+	'/signin/check-mail'
+];
 
 /**
  * @param {string} buildDir
@@ -74,7 +84,8 @@ export async function measurePages(buildDir) {
 	};
 	const byId = new Map(build.routes.map((r) => [r.id, r]));
 	// The floor: what every page sends, i.e. the entries and the root layout alone (node 0).
-	const rootLayout = build.routes.find((r) => r.page)?.page.layouts.find((/** @type {unknown} */ x) => x !== undefined) ?? 0;
+	const rootLayout =
+		build.routes.find((r) => r.page)?.page.layouts.find((/** @type {unknown} */ x) => x !== undefined) ?? 0;
 	const floor = size([rootLayout]);
 	/** @type {Record<string, ReturnType<typeof size> & { nodes: number[] } | { missing: true }>} */
 	const routes = {};
@@ -91,15 +102,24 @@ export async function measurePages(buildDir) {
 }
 
 /**
- * Checks the build-output figures against a served page: the scripts and stylesheets its HTML names
- * must be exactly the files counted for its route.
+ * Checks the build-output figures against a served page: the scripts and stylesheets it names (in its
+ * HTML and in the Link preload header SvelteKit sends) must be exactly the files counted for its route.
  * @param {string} html
+ * @param {string} linkHeader
  * @param {{ js: string[], css: string[] }} counted
  */
-export function compareWithHtml(html, counted) {
-	const named = new Set([...html.matchAll(/(?:href|import\()\s*=?\s*["']([^"']*_app\/immutable\/[^"']+\.(?:js|css))["']/g)].map((m) => m[1].replace(/^.*?(_app\/immutable\/)/, '$1')));
+export function compareWithHtml(html, linkHeader, counted) {
+	const inHtml = [...html.matchAll(/["'(<]\.?\.?\/?((?:\.\.\/)*_app\/immutable\/[^"'>)\s]+\.(?:js|css))/g)].map(
+		(m) => m[1]
+	);
+	const inHeader = [...linkHeader.matchAll(/<([^>]+)>/g)].map((m) => m[1]);
+	const named = new Set(
+		[...inHtml, ...inHeader]
+			.filter((f) => /_app\/immutable\/.*\.(js|css)$/.test(f))
+			.map((f) => f.replace(/^.*?(_app\/immutable\/)/, '$1'))
+	);
 	const want = new Set([...counted.js, ...counted.css]);
 	const extra = [...named].filter((f) => !want.has(f));
 	const missing = [...want].filter((f) => !named.has(f));
-	return { agree: extra.length === 0 && missing.length === 0, extra, missing };
+	return { agree: extra.length === 0 && missing.length === 0, named: named.size, extra, missing };
 }

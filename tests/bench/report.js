@@ -12,8 +12,26 @@ const r1 = (/** @type {number} */ x) => Math.round(x * 10) / 10;
 const r3 = (/** @type {number} */ x) => Math.round(x * 1000) / 1000;
 
 /** @param {Partial<Row> & { id: string, measure: string }} r @returns {Row} */
-const row = (r) => ({ unit: '', median: null, p95: null, floor: null, floorWhat: '', ratio: null, target: '—', met: null, notes: '', ...r });
-const notMeasured = (/** @type {string} */ id, /** @type {string} */ measure, /** @type {string} */ why, target = '—') => row({ id, measure, median: `not measured: ${why}`, target });
+const row = ({ id, measure, ...rest }) => ({
+	id,
+	measure,
+	unit: '',
+	median: null,
+	p95: null,
+	floor: null,
+	floorWhat: '',
+	ratio: null,
+	target: '—',
+	met: null,
+	notes: '',
+	...rest
+});
+const notMeasured = (
+	/** @type {string} */ id,
+	/** @type {string} */ measure,
+	/** @type {string} */ why,
+	target = '—'
+) => row({ id, measure, median: `not measured: ${why}`, target });
 
 /** @param {any} raw */
 export function rowsFrom(raw) {
@@ -26,7 +44,19 @@ export function rowsFrom(raw) {
 		const s = draft.single;
 		const fl = s.floor;
 		const single = (/** @type {string} */ id, /** @type {string} */ what, /** @type {any} */ x) =>
-			row({ id, measure: what, unit: 'µs', median: Math.round(x.median), p95: Math.round(x.p95), floor: Math.round(fl.median), floorWhat: 'draftSkirt alone (median)', ratio: r3(x.median / fl.median), target: 'median < 1000 µs', met: x.median < 1000, notes: `${s.runs} runs; engine's bench.ts: ${Math.round(draft.engineBench.medianMicros)} µs` });
+			row({
+				id,
+				measure: what,
+				unit: 'µs',
+				median: Math.round(x.median),
+				p95: Math.round(x.p95),
+				floor: Math.round(fl.median),
+				floorWhat: 'draftSkirt alone (median)',
+				ratio: r3(x.median / fl.median),
+				target: 'median < 1000 µs',
+				met: x.median < 1000,
+				notes: `${s.runs} runs; engine's bench.ts: ${Math.round(draft.engineBench.medianMicros)} µs`
+			});
 		rows.push(single('draft.estimate', 'draft: one draft + fabric estimate', s.noSvg));
 		rows.push(single('draft.full', 'draft: + pieces drawing (as /api/quote)', s.full));
 		const rnd = draft.random;
@@ -45,10 +75,16 @@ export function rowsFrom(raw) {
 		);
 	}
 
-	if (isErr(quote)) rows.push(notMeasured('quote.latency', 'quote API: POST /api/quote', quote?.error ?? 'failed', 'p95 ≤ 1.5 × floor'));
+	if (isErr(quote))
+		rows.push(
+			notMeasured('quote.latency', 'quote API: POST /api/quote', quote?.error ?? 'failed', 'p95 ≤ 1.5 × floor')
+		);
 	else {
 		const f = quote.floor;
-		const codes = (/** @type {any} */ x) => Object.entries(x.statuses).map(([k, v]) => `${k}×${v}`).join(' ');
+		const codes = (/** @type {any} */ x) =>
+			Object.entries(x.statuses)
+				.map(([k, v]) => `${k}×${v}`)
+				.join(' ');
 		rows.push(
 			row({
 				id: 'quote.latency',
@@ -79,8 +115,17 @@ export function rowsFrom(raw) {
 	}
 
 	const ticketTarget = '≤ 3 × floor and < 150 ms';
-	if (isErr(ticket)) rows.push(notMeasured('ticket', 'ticket PDF: GET as the cutter', ticket?.error ?? 'failed', ticketTarget));
-	else if (!ticket.measured) rows.push(row({ ...notMeasured('ticket', 'ticket PDF: GET as the cutter', ticket.reason, ticketTarget), unit: 'ms', floor: r1(ticket.floor.median), floorWhat: 'one-page pdfkit doc, Lora woff (median)' }));
+	if (isErr(ticket))
+		rows.push(notMeasured('ticket', 'ticket PDF: GET as the cutter', ticket?.error ?? 'failed', ticketTarget));
+	else if (!ticket.measured)
+		rows.push(
+			row({
+				...notMeasured('ticket', 'ticket PDF: GET as the cutter', ticket.reason, ticketTarget),
+				unit: 'ms',
+				floor: r1(ticket.floor.median),
+				floorWhat: 'one-page pdfkit doc, same Lora (median)'
+			})
+		);
 	else
 		rows.push(
 			row({
@@ -90,15 +135,23 @@ export function rowsFrom(raw) {
 				median: r1(ticket.median),
 				p95: r1(ticket.p95),
 				floor: r1(ticket.floor.median),
-				floorWhat: 'one-page pdfkit doc, Lora woff (median)',
+				floorWhat: 'one-page pdfkit doc, same Lora (median)',
 				ratio: r3(ticket.median / ticket.floor.median),
 				target: ticketTarget,
 				met: ticket.failed === 0 && ticket.median <= 3 * ticket.floor.median && ticket.median < 150,
-				notes: `order ${ticket.number}, ${ticket.n} GETs one at a time, ${ticket.failed} failed, ${ticket.pages} pages, ${Math.round(ticket.bytes / 1024)} KB; floor p95 ${r1(ticket.floor.p95)} ms`
+				notes: `order ${ticket.number}, ${ticket.n} GETs one at a time, ${ticket.failed} failed, ${ticket.pages} pages, ${Math.round(ticket.bytes / 1024)} KB; floor p95 ${r1(ticket.floor.p95)} ms; the floor from the raw .woff (fontkit inflating per document): ${r1(ticket.floor.fromRawWoff.median)} ms`
 			})
 		);
 
-	if (isErr(checkout)) rows.push(notMeasured('checkout', 'checkout: 500 orders, 50 clients', checkout?.error ?? 'failed', 'paid 500 / lost 0 / dup 0'));
+	if (isErr(checkout))
+		rows.push(
+			notMeasured(
+				'checkout',
+				'checkout: 500 orders, 50 clients',
+				checkout?.error ?? 'failed',
+				'paid 500 / lost 0 / dup 0'
+			)
+		);
 	else {
 		const c = checkout;
 		rows.push(
@@ -111,7 +164,11 @@ export function rowsFrom(raw) {
 				floor: r1(c.floor.perOrderMs.median),
 				floorWhat: '3 bare health round trips (median)',
 				ratio: r3(c.perOrderMs.median / c.floor.perOrderMs.median),
-				notes: `client side, ${c.clients} clients; failures: ${Object.entries(c.failures).map(([k, v]) => `${k}×${v}`).join(' ') || 'none'}`
+				notes: `client side, ${c.clients} clients; failures: ${
+					Object.entries(c.failures)
+						.map(([k, v]) => `${k}×${v}`)
+						.join(' ') || 'none'
+				}`
 			})
 		);
 		rows.push(
@@ -139,11 +196,25 @@ export function rowsFrom(raw) {
 		);
 	}
 
-	if (isErr(pages)) rows.push(notMeasured('pages', 'pages: JS per route', pages?.error ?? 'failed', 'configure ≤ 100 KB JS'));
+	if (isErr(pages))
+		rows.push(notMeasured('pages', 'pages: JS per route', pages?.error ?? 'failed', 'configure ≤ 100 KB JS'));
 	else {
 		const f = pages.floor;
-		const agree = Object.entries(pages.htmlCheck ?? {}).map(([p, c]) => `${p} ${/** @type {any} */ (c).agree ? 'agrees' : 'DISAGREES'}`);
-		rows.push(row({ id: 'pages.floor', measure: 'pages: root layout only (the floor)', unit: 'KB gz JS', median: r1(f.jsKB), floor: r1(f.jsKB), floorWhat: 'entries + root layout', ratio: 1, notes: `CSS ${r1(f.cssKB)} KB; HTML check: ${agree.join(', ') || 'not run'}` }));
+		const agree = Object.entries(pages.htmlCheck ?? {}).map(
+			([p, c]) => `${p} ${/** @type {any} */ (c).agree ? 'agrees' : 'DISAGREES'}`
+		);
+		rows.push(
+			row({
+				id: 'pages.floor',
+				measure: 'pages: root layout only (the floor)',
+				unit: 'KB gz JS',
+				median: r1(f.jsKB),
+				floor: r1(f.jsKB),
+				floorWhat: 'entries + root layout',
+				ratio: 1,
+				notes: `CSS ${r1(f.cssKB)} KB; HTML check: ${agree.join(', ') || 'not run'}`
+			})
+		);
 		for (const [id, r] of Object.entries(pages.routes)) {
 			const configure = id === '/styles/[slug]/make';
 			if (r.missing) {
@@ -171,18 +242,33 @@ export function rowsFrom(raw) {
 
 /** @param {Row[]} rows @param {any} report */
 export function printTable(rows, report) {
-	const fmt = (/** @type {unknown} */ v) => (v === null || v === undefined ? '—' : typeof v === 'number' ? String(v) : String(v));
+	const fmt = (/** @type {unknown} */ v) =>
+		v === null || v === undefined ? '—' : typeof v === 'number' ? String(v) : String(v);
 	const head = ['measure', 'unit', 'median', 'p95', 'floor', 'ratio', 'target', 'result', 'notes'];
-	const cells = rows.map((r) => [r.measure, r.unit, fmt(r.median), fmt(r.p95), fmt(r.floor), r.ratio === null ? '—' : `${r.ratio.toFixed(2)}×`, r.target, r.met === null ? '' : r.met ? 'met' : 'MISSED', r.notes]);
+	const cells = rows.map((r) => [
+		r.measure,
+		r.unit,
+		fmt(r.median),
+		fmt(r.p95),
+		fmt(r.floor),
+		r.ratio === null ? '—' : `${r.ratio.toFixed(2)}×`,
+		r.target,
+		r.met === null ? '' : r.met ? 'met' : 'MISSED',
+		r.notes
+	]);
 	const numeric = new Set([2, 3, 4, 5]);
 	const widths = head.map((h, i) => (i === head.length - 1 ? 0 : Math.max(h.length, ...cells.map((c) => c[i].length))));
-	const line = (/** @type {string[]} */ c) => c.map((x, i) => (i === c.length - 1 ? x : numeric.has(i) ? x.padStart(widths[i]) : x.padEnd(widths[i]))).join('  ');
+	const line = (/** @type {string[]} */ c) =>
+		c.map((x, i) => (i === c.length - 1 ? x : numeric.has(i) ? x.padStart(widths[i]) : x.padEnd(widths[i]))).join('  ');
 	const m = report.machine;
-	console.log(`\nQuarterline bench · ${report.startedAt} · Node ${report.node} · ${m.cpus} CPUs (${m.model}) · load average before ${m.loadavgBefore.map((/** @type {number} */ x) => x.toFixed(1)).join(' ')}, after ${m.loadavgAfter.map((/** @type {number} */ x) => x.toFixed(1)).join(' ')}\n`);
+	console.log(
+		`\nQuarterline bench · ${report.startedAt} · Node ${report.node} · ${m.cpus} CPUs (${m.model}) · load average before ${m.loadavgBefore.map((/** @type {number} */ x) => x.toFixed(1)).join(' ')}, after ${m.loadavgAfter.map((/** @type {number} */ x) => x.toFixed(1)).join(' ')}\n`
+	);
 	console.log(line(head));
 	console.log(line(widths.map((w, i) => '─'.repeat(i === head.length - 1 ? 5 : w))));
 	for (const c of cells) console.log(line(c));
 	console.log('\nratio = figure ÷ floor (for req/s and orders/s, below 1 means slower than the floor). Floors:');
 	const seen = new Set();
-	for (const r of rows) if (r.floorWhat && !seen.has(r.floorWhat)) seen.add(r.floorWhat) && console.log(`  ${r.measure}: ${r.floorWhat}`);
+	for (const r of rows)
+		if (r.floorWhat && !seen.has(r.floorWhat)) seen.add(r.floorWhat) && console.log(`  ${r.measure}: ${r.floorWhat}`);
 }

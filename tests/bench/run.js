@@ -27,7 +27,10 @@ onShutdown(stopStack);
 /** Runs the in-process engine measures in a child (TypeScript through tsx) and parses its JSON line. */
 function draftBench() {
 	return new Promise((resolve, reject) => {
-		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], {
+			cwd: ROOT,
+			stdio: ['ignore', 'pipe', 'pipe']
+		});
 		let out = '';
 		let err = '';
 		child.stdout.on('data', (c) => (out += c));
@@ -84,31 +87,50 @@ async function main() {
 		// Cross-check on two public pages: the files their HTML names are exactly the ones counted.
 		/** @type {Record<string, unknown>} */
 		const htmlCheck = {};
-		for (const [route, path] of [['/', '/'], ['/styles/[slug]/make', '/styles/rue-straight/make']]) {
+		for (const [route, path] of [
+			['/', '/'],
+			['/styles/[slug]/make', '/styles/rue-straight/make']
+		]) {
 			const r = p.routes[route];
 			if (!r || 'missing' in r) continue;
 			const res = await fetch(`${env.APP_URL}${path}`);
-			htmlCheck[path] = res.ok ? compareWithHtml(await res.text(), r.files) : { agree: false, status: res.status };
+			htmlCheck[path] = res.ok
+				? compareWithHtml(await res.text(), res.headers.get('link') ?? '', r.files)
+				: { agree: false, status: res.status };
 		}
 		return { ...p, htmlCheck };
 	});
 
-	const quote = await measure('quote API: POST /api/quote vs GET /healthz, 32 connections, 10 s each', () => measureQuote({ appUrl: env.APP_URL }));
+	const quote = await measure('quote API: POST /api/quote vs GET /healthz, 32 connections, 10 s each', () =>
+		measureQuote({ appUrl: env.APP_URL })
+	);
 
 	const ticket = await measure('ticket PDF: GET as the cutter vs a one-page pdfkit document', async () => {
 		const db = await mysql.createConnection({ uri: env.DATABASE_URL });
 		try {
-			const [rows] = /** @type {any} */ (await db.query("SELECT id, number FROM `order` WHERE status IN ('cutting', 'paid') ORDER BY status = 'cutting' DESC, id LIMIT 1"));
+			const [rows] = /** @type {any} */ (
+				await db.query(
+					"SELECT id, number FROM `order` WHERE status IN ('cutting', 'paid') ORDER BY status = 'cutting' DESC, id LIMIT 1"
+				)
+			);
 			if (!rows.length) throw new Error('no paid or cutting order in the seed');
 			const routeMissing = !('routeIds' in pages) || !pages.routeIds.includes(TICKET_ROUTE);
-			return { number: rows[0].number, ...(await measureTicket({ appUrl: env.APP_URL, orderId: rows[0].id, routeMissing })) };
+			return {
+				number: rows[0].number,
+				...(await measureTicket({ appUrl: env.APP_URL, orderId: rows[0].id, routeMissing }))
+			};
 		} finally {
 			await db.end();
 		}
 	});
 
 	const checkout = await measure('checkout: 500 orders by 50 clients, quote → order → pay → webhook', () =>
-		measureCheckout({ appUrl: env.APP_URL, paymentsUrl: env.PAYMENTS_URL, databaseUrl: env.DATABASE_URL, runTag: Date.now().toString(36) })
+		measureCheckout({
+			appUrl: env.APP_URL,
+			paymentsUrl: env.PAYMENTS_URL,
+			databaseUrl: env.DATABASE_URL,
+			runTag: Date.now().toString(36)
+		})
 	);
 
 	const raw = { draft, quote, ticket, checkout, pages };
@@ -117,9 +139,24 @@ async function main() {
 		startedAt: startedAt.toISOString(),
 		finishedAt: new Date().toISOString(),
 		node: process.version,
-		machine: { cpus: os.cpus().length, model: os.cpus()[0]?.model ?? '', loadavgBefore: loadBefore, loadavgAfter: os.loadavg() },
+		machine: {
+			cpus: os.cpus().length,
+			model: os.cpus()[0]?.model ?? '',
+			loadavgBefore: loadBefore,
+			loadavgAfter: os.loadavg()
+		},
 		rows,
-		raw: { ...raw, pages: 'error' in pages ? pages : { ...pages, routes: Object.fromEntries(Object.entries(pages.routes).map(([k, v]) => [k, { ...v, files: undefined }])), floor: { ...pages.floor, files: undefined } } }
+		raw: {
+			...raw,
+			pages:
+				'error' in pages
+					? pages
+					: {
+							...pages,
+							routes: Object.fromEntries(Object.entries(pages.routes).map(([k, v]) => [k, { ...v, files: undefined }])),
+							floor: { ...pages.floor, files: undefined }
+						}
+		}
 	};
 	writeFileSync(join(ROOT, 'bench.json'), `${JSON.stringify(report, null, 2)}\n`);
 	printTable(rows, report);

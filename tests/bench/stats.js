@@ -12,5 +12,12 @@ export function percentile(sorted, p) {
 export function summarise(values) {
 	const s = [...values].sort((a, b) => a - b);
 	const mean = s.reduce((a, b) => a + b, 0) / (s.length || 1);
-	return { n: s.length, median: percentile(s, 50), p95: percentile(s, 95), min: s[0] ?? NaN, max: s[s.length - 1] ?? NaN, mean };
+	return {
+		n: s.length,
+		median: percentile(s, 50),
+		p95: percentile(s, 95),
+		min: s[0] ?? NaN,
+		max: s[s.length - 1] ?? NaN,
+		mean
+	};
 }

@@ -1,13 +1,17 @@
 // @ts-check
 // Ticket PDF: GET of one order's cutting ticket as a signed-in cutter, one request at a time, against
 // a floor made in this (the bench's) process: a one-page pdfkit document in the same embedded Lora
-// woff faces the ticket uses (latin 400 and 600), with a heading and a few lines of text.
+// faces the ticket uses (latin 400 and 600 from @fontsource/lora's .woff files, their tables inflated
+// once with zlib as src/lib/server/ticket/fonts.ts does), with a heading and a few lines of text.
+// Beside it, the same document from the raw .woff files, where fontkit inflates every table in
+// JavaScript for each new document: the cost the ticket code avoids by converting once.
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import PDFDocument from 'pdfkit';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { summarise } from './stats.js';
+import { woffToSfnt } from './woff.js';
 
 export const TICKET_ROUTE = '/workroom/orders/[id]/ticket.pdf';
 
@@ -29,24 +33,33 @@ export async function signInCookie(/** @type {string} */ appUrl, /** @type {stri
 
 const require = createRequire(import.meta.url);
 const loraDir = join(dirname(require.resolve('@fontsource/lora/400.css')), 'files');
-// Read once, as the app's fonts.ts does: the floor times making the document, not reading the disk.
-const LORA = { regular: readFileSync(join(loraDir, 'lora-latin-400-normal.woff')), semibold: readFileSync(join(loraDir, 'lora-latin-600-normal.woff')) };
+// Read and converted once, as the app's fonts.ts does: the floor times making the document only.
+const LORA_WOFF = {
+	regular: readFileSync(join(loraDir, 'lora-latin-400-normal.woff')),
+	semibold: readFileSync(join(loraDir, 'lora-latin-600-normal.woff'))
+};
+const LORA = { regular: woffToSfnt(LORA_WOFF.regular), semibold: woffToSfnt(LORA_WOFF.semibold) };
 
 /** One A4 page of text in embedded Lora, ended and collected into a Buffer. */
-export function floorPdf() {
+export function floorPdf(fonts = LORA) {
 	return new Promise((resolve, reject) => {
-		const doc = new PDFDocument({ autoFirstPage: false, margin: 0, font: /** @type {string} */ (/** @type {unknown} */ (null)) });
+		const doc = new PDFDocument({
+			autoFirstPage: false,
+			margin: 0,
+			font: /** @type {string} */ (/** @type {unknown} */ (null))
+		});
 		/** @type {Buffer[]} */
 		const chunks = [];
 		doc.on('data', (c) => chunks.push(c));
 		doc.on('end', () => resolve(Buffer.concat(chunks)));
 		doc.on('error', reject);
-		doc.registerFont('lora-400', LORA.regular);
-		doc.registerFont('lora-600', LORA.semibold);
+		doc.registerFont('lora-400', fonts.regular);
+		doc.registerFont('lora-600', fonts.semibold);
 		doc.addPage({ size: [595.28, 841.89], margin: 0 });
 		doc.font('lora-600').fontSize(16).text('Cutting ticket QL-0000', 34, 40);
 		doc.font('lora-400').fontSize(9);
-		for (let i = 0; i < 12; i++) doc.text(`Line ${i + 1}: waist 68.0 cm, hip 94.0 cm, length 58.5 cm, waist to hip 20.6 cm.`, 34, 80 + i * 14);
+		for (let i = 0; i < 12; i++)
+			doc.text(`Line ${i + 1}: waist 68.0 cm, hip 94.0 cm, length 58.5 cm, waist to hip 20.6 cm.`, 34, 80 + i * 14);
 		doc.end();
 	});
 }
@@ -67,7 +80,14 @@ export async function measureTicket(o) {
 		floorTimes.push(performance.now() - t);
 		floorBytes = pdf.length;
 	}
-	const floor = { ...summarise(floorTimes), bytes: floorBytes };
+	/** @type {number[]} */
+	const woffTimes = [];
+	for (let i = 0; i < Math.min(runs, 10); i++) {
+		const t = performance.now();
+		await floorPdf(LORA_WOFF);
+		woffTimes.push(performance.now() - t);
+	}
+	const floor = { ...summarise(floorTimes), bytes: floorBytes, fromRawWoff: summarise(woffTimes) };
 	if (o.routeMissing) return { measured: false, reason: 'route missing', floor };
 
 	const cookie = await signInCookie(o.appUrl, DEMO_SIGN_INS.accounts.find((a) => a.role === 'cutter')?.email ?? '');
@@ -77,8 +97,17 @@ export async function measureTicket(o) {
 		const res = await fetch(url, { headers: { cookie }, redirect: 'manual' });
 		const body = Buffer.from(await res.arrayBuffer());
 		const ms = performance.now() - t;
-		const ok = res.status === 200 && /pdf/.test(res.headers.get('content-type') ?? '') && body.subarray(0, 5).toString() === '%PDF-';
-		return { ms, ok, status: res.status, bytes: body.length, pages: (body.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length };
+		const ok =
+			res.status === 200 &&
+			/pdf/.test(res.headers.get('content-type') ?? '') &&
+			body.subarray(0, 5).toString() === '%PDF-';
+		return {
+			ms,
+			ok,
+			status: res.status,
+			bytes: body.length,
+			pages: (body.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length
+		};
 	};
 	const first = await get();
 	if (!first.ok) return { measured: false, reason: `GET ${url} answered ${first.status}, not a PDF`, floor };
@@ -92,5 +121,14 @@ export async function measureTicket(o) {
 		if (!last.ok) failed++;
 		times.push(last.ms);
 	}
-	return { measured: true, url, orderId: o.orderId, ...summarise(times), failed, bytes: last.bytes, pages: last.pages, floor };
+	return {
+		measured: true,
+		url,
+		orderId: o.orderId,
+		...summarise(times),
+		failed,
+		bytes: last.bytes,
+		pages: last.pages,
+		floor
+	};
 }

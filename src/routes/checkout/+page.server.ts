@@ -36,7 +36,7 @@ export const actions: Actions = {
 		});
 		if (!placed.ok) return message(form, placed.problem.message, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
 		clearBag(cookies);
-		await deliverQueued(placed.mailIds);
+		void deliverQueued(placed.mailIds);
 		const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
 		// The order is saved either way; when the payment service is away she lands on her order
 		// page, which says so and offers to try again.

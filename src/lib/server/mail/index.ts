@@ -15,7 +15,11 @@ export function sendMail(message: MailMessage) {
 	return queueMail(db, mailSettings(), message);
 }
 
-/** Sends messages queued inside a transaction, once it has committed; failures wait for the worker. */
+/**
+ * Sends messages queued inside a transaction, once it has committed. Callers do not wait for it:
+ * the message is safe in the outbox, and an SMTP round trip should not hold up the answer. It never
+ * throws; a failed send waits for the outbox worker.
+ */
 export async function deliverQueued(ids: number[]) {
 	for (const id of ids) await deliverOne(db, mailSettings(), id).catch(() => false);
 }

@@ -16,18 +16,18 @@ export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: 
  * rules. The quote API, the bag and the checkout all call this, so the shopper sees the price she pays.
  */
 export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: boolean; now?: Date } = {}) {
-	const [style] = await db.select().from(styles).where(and(eq(styles.slug, input.style), isNull(styles.retiredAt))).limit(1);
-	if (!style) return { ok: false as const, problem: { status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } } satisfies QuoteProblem };
-	let fabric: typeof fabrics.$inferSelect | undefined;
-	if (input.fabricId !== undefined) {
-		[fabric] = await db.select().from(fabrics).where(and(eq(fabrics.id, input.fabricId), isNull(fabrics.retiredAt))).limit(1);
-		if (!fabric) return { ok: false as const, problem: { status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } } satisfies QuoteProblem };
-	}
-	const [{ id: rulesId, rules }, settings, [{ waiting }]] = await Promise.all([
+	// One round trip: the lookups go out together.
+	const [[style], [fabric], { id: rulesId, rules }, settings, [{ waiting }]] = await Promise.all([
+		db.select().from(styles).where(and(eq(styles.slug, input.style), isNull(styles.retiredAt))).limit(1),
+		input.fabricId === undefined ? Promise.resolve([undefined]) : db.select().from(fabrics).where(and(eq(fabrics.id, input.fabricId), isNull(fabrics.retiredAt))).limit(1),
 		currentRules(db),
 		shopSettingsOf(db),
 		db.select({ waiting: count() }).from(orders).where(inArray(orders.status, [...OPEN_WORK_STAGES]))
 	]);
+	if (!style) return { ok: false as const, problem: { status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } } satisfies QuoteProblem };
+	if (input.fabricId !== undefined && !fabric) {
+		return { ok: false as const, problem: { status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } } satisfies QuoteProblem };
+	}
 
 	let draft;
 	try {

@@ -29,7 +29,7 @@ export const POST: RequestHandler = async ({ request, locals, url }) => {
 		address: { name: shopper.name, line1: shopper.line1, ...(shopper.line2 ? { line2: shopper.line2 } : {}), city: shopper.city, postcode: shopper.postcode, country: shopper.country }
 	});
 	if (!placed.ok) return json({ message: placed.problem.message }, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
-	await deliverQueued(placed.mailIds);
+	void deliverQueued(placed.mailIds);
 	const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
 	if (!payment.ok) return json({ number: placed.order.number, message: payment.message }, { status: 503 });
 	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url }, { status: 201 });

@@ -43,7 +43,7 @@ export const actions: Actions = {
 		const user = locals.user!;
 		const result = await workroomMove(db, { orderId: Number(params.id), ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
 		if (!result.ok) return fail(result.status, { message: result.message });
-		await deliverQueued(result.mailIds);
+		void deliverQueued(result.mailIds);
 		return { message: 'Stage changed.' };
 	}
 };

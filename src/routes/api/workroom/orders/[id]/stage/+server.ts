@@ -17,6 +17,6 @@ export const POST: RequestHandler = async ({ params, request, locals }) => {
 	const user = locals.user!;
 	const result = await workroomMove(db, { orderId: id, ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
 	if (!result.ok) return json({ message: result.message }, { status: result.status });
-	await deliverQueued(result.mailIds);
+	void deliverQueued(result.mailIds);
 	return json({ id, status: result.order.status });
 };
