@@ -16,8 +16,17 @@ const cookies: Record<'cutter' | 'shopper', string> = { cutter: '', shopper: '' 
 // move their stage, but not their figures.
 const PAID = DEMO_ORDERS.filter((o) => o.stage === 'paid').map((o) => o.number);
 
-type Panel = { hipWidth: number; waistWidth: number; sideRaise: number; darts: { fromCentre: number; intake: number; length: number }[] };
-let seeded: { id: number; number: string; figures: { back: Panel & { centreShaping: number }; front: Panel & { centreDrop: number } } }[] = [];
+type Panel = {
+	hipWidth: number;
+	waistWidth: number;
+	sideRaise: number;
+	darts: { fromCentre: number; intake: number; length: number }[];
+};
+let seeded: {
+	id: number;
+	number: string;
+	figures: { back: Panel & { centreShaping: number }; front: Panel & { centreDrop: number } };
+}[] = [];
 
 beforeAll(async () => {
 	for (const role of ['cutter', 'shopper'] as const) {
@@ -43,9 +52,11 @@ async function pdfText(res: Response) {
 	}
 }
 
-const get = (path: string, cookie?: string) => fetch(`${testEnv.appUrl}${path}`, { redirect: 'manual', headers: cookie ? { cookie } : {} });
+const get = (path: string, cookie?: string) =>
+	fetch(`${testEnv.appUrl}${path}`, { redirect: 'manual', headers: cookie ? { cookie } : {} });
 const esc = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-const row = (label: string, back: number, front: number) => new RegExp(`${esc(label)}\\s+${esc(formatCm(back))}\\s+${esc(formatCm(front))}`);
+const row = (label: string, back: number, front: number) =>
+	new RegExp(`${esc(label)}\\s+${esc(formatCm(back))}\\s+${esc(formatCm(front))}`);
 
 describe('cutting ticket routes', () => {
 	it('gives the cutter a PDF with the order number and the figures stored with the order line', async () => {
@@ -64,7 +75,7 @@ describe('cutting ticket routes', () => {
 		back.darts.forEach((d, i) => {
 			const f = front.darts[i];
 			if (!f) return;
-			expect(text).toMatch(row(`Dart ${i + 1}: position (centre line to its middle, along the waist)`, d.fromCentre, f.fromCentre));
+			expect(text).toMatch(row(`Dart ${i + 1}: position, centre line to its middle`, d.fromCentre, f.fromCentre));
 			expect(text).toMatch(row(`Dart ${i + 1}: intake`, d.intake, f.intake));
 			expect(text).toMatch(row(`Dart ${i + 1}: length`, d.length, f.length));
 		});
@@ -81,6 +92,12 @@ describe('cutting ticket routes', () => {
 		const text = await pdfText(res);
 		expect(text).toContain(a.number);
 		expect(text).toContain(b.number);
+		// The queue's checkboxes send the ids as repeated parameters.
+		const form = await get(`/workroom/tickets.pdf?ids=${a.id}&ids=${b.id}`, cookies.cutter);
+		expect(form.status).toBe(200);
+		const both = await pdfText(form);
+		expect(both).toContain(a.number);
+		expect(both).toContain(b.number);
 	});
 
 	it('answers 404 for an order that does not exist and 400 for ids it cannot read', async () => {

@@ -57,7 +57,8 @@ export async function seedDemo(db: Db, now = new Date()) {
 		const style = styleRows.get(o.style)!;
 		const fabric = fabricRows.get(o.fabric)!;
 		const { waistToHip, ...girths } = o.measurements;
-		const draft = draftSkirt(waistToHip === null ? girths : { ...girths, waistToHip }, { style: style.kind as StyleId, ...o.options }, DEFAULT_RULES);
+		const choice = { style: style.kind as StyleId, ...o.options, stretch: fabric.stretch };
+		const draft = draftSkirt(waistToHip === null ? girths : { ...girths, waistToHip }, choice, DEFAULT_RULES);
 		const estimate = estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct });
 		const pricing = priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: o.options, optionPrices: style.optionPrices });
 		const shipping = shippingCost(pricing.total, DEFAULT_SETTINGS.shipping);
@@ -94,7 +95,7 @@ export async function seedDemo(db: Db, now = new Date()) {
 				orderId: id,
 				styleId: style.id,
 				fabricId: fabric.id,
-				options: { style: style.kind, ...o.options },
+				options: choice,
 				measurements: o.measurements,
 				figures: draft.figures as unknown as Record<string, unknown>,
 				fabricCm: estimate.length,

@@ -68,7 +68,8 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 				orderId: id,
 				styleId: q.style.id,
 				fabricId: q.fabric!.id,
-				options: { style: q.style.kind, ...q.item.options },
+				// Stretch comes from the cloth; kept with the order so a reprinted ticket drafts the same vent.
+				options: { style: q.style.kind, ...q.item.options, stretch: q.fabric!.stretch },
 				measurements: { ...q.item.measurements, waistToHip: q.item.measurements.waistToHip ?? null },
 				figures: q.draft.figures as unknown as Record<string, unknown>,
 				fabricCm: q.quote.fabric!.lengthCm,

@@ -1,0 +1,217 @@
+// The drafted block's figures for each panel, the checks a pattern cutter makes, and the piece list.
+import type { DartFigure, Piece } from '../../drafting';
+import { formatCm } from '../../drafting';
+import type { Frame } from './page-one';
+import { INK, PENCIL, heading, line, widthOf } from './text';
+import type { Ticket } from './ticket';
+import { allowanceWords, cutSize } from './words';
+
+type Doc = PDFKit.PDFDocument;
+
+const ROW = 10.5;
+
+function row(
+	doc: Doc,
+	cells: { text: string; x: number; align?: 'left' | 'right'; color?: string; weight?: 400 | 600; maxWidth?: number }[],
+	y: number,
+	size = 8
+) {
+	for (const c of cells)
+		line(doc, c.text, c.x, y, {
+			size,
+			align: c.align ?? 'left',
+			color: c.color ?? INK,
+			weight: c.weight,
+			maxWidth: c.maxWidth
+		});
+}
+
+const dartCell = (darts: DartFigure[], i: number, key: keyof DartFigure) => (darts[i] ? formatCm(darts[i][key]) : '—');
+
+/** Block figures (left) and checks (right); returns the y below. */
+export function blockFigures(doc: Doc, t: Ticket, f: Frame, top: number): number {
+	const W = f.right - f.left;
+	const wl = W * 0.58;
+	const x = f.left;
+	const fig = t.draft.figures;
+	let y = heading(doc, 'Block figures, each panel (on the seam line, no allowances)', x, top, wl);
+	const cB = x + wl * 0.78;
+	const cF = x + wl;
+	row(
+		doc,
+		[
+			{ text: 'Back', x: cB, align: 'right', color: PENCIL },
+			{ text: 'Front', x: cF, align: 'right', color: PENCIL }
+		],
+		y + 7,
+		7
+	);
+	y += ROW - 1;
+	const rows: [string, string, string][] = [
+		[
+			'Hip width (centre line to side seam, on the hip line)',
+			formatCm(fig.back.hipWidth),
+			formatCm(fig.front.hipWidth)
+		],
+		['Waist width (to the waist mark, darts open)', formatCm(fig.back.waistWidth), formatCm(fig.front.waistWidth)],
+		['Side shaping (hip width − waist width)', formatCm(fig.back.sideShaping), formatCm(fig.front.sideShaping)],
+		['Side raise (side waist point above the waist line)', formatCm(fig.back.sideRaise), formatCm(fig.front.sideRaise)],
+		['Centre back shaping / centre front drop', formatCm(fig.back.centreShaping), formatCm(fig.front.centreDrop)]
+	];
+	const n = Math.max(fig.back.darts.length, fig.front.darts.length);
+	if (n === 0) rows.push(['Darts', 'none', 'none']);
+	for (let i = 0; i < n; i++) {
+		rows.push([
+			`Dart ${i + 1}: position, centre line to its middle`,
+			dartCell(fig.back.darts, i, 'fromCentre'),
+			dartCell(fig.front.darts, i, 'fromCentre')
+		]);
+		rows.push([`Dart ${i + 1}: intake`, dartCell(fig.back.darts, i, 'intake'), dartCell(fig.front.darts, i, 'intake')]);
+		rows.push([`Dart ${i + 1}: length`, dartCell(fig.back.darts, i, 'length'), dartCell(fig.front.darts, i, 'length')]);
+	}
+	for (const [label, b, fr] of rows) {
+		row(
+			doc,
+			[
+				{ text: label, x, color: PENCIL, maxWidth: wl * 0.64 },
+				{ text: b, x: cB, align: 'right' },
+				{ text: fr, x: cF, align: 'right' }
+			],
+			y + 8
+		);
+		y += ROW;
+	}
+	const style = t.draft.style;
+	const note =
+		style === 'half-circle' || style === 'full-circle'
+			? 'A circle skirt is cut from its waist radius and has no darts: the block is for reference.'
+			: style === 'gored'
+				? 'The six panels take this dart shaping into their seams.'
+				: style === 'a-line'
+					? 'The A-line closes the dart nearest the side into flare at the hem.'
+					: '';
+	if (note) {
+		line(doc, note, x, y + 8, { size: 6.8, color: PENCIL, maxWidth: wl });
+		y += ROW;
+	}
+	// Checks, beside the figures.
+	const xr = f.left + wl + 18;
+	const wr = f.right - xr;
+	let yr = heading(doc, 'Checks', xr, top, wr);
+	const rB = xr + wr * 0.78;
+	row(
+		doc,
+		[
+			{ text: 'Back', x: rB, align: 'right', color: PENCIL },
+			{ text: 'Front', x: xr + wr, align: 'right', color: PENCIL }
+		],
+		yr + 7,
+		7
+	);
+	yr += ROW - 1;
+	const c = fig.check;
+	const checks: [string, string, string][] = [
+		['Waist seam, darts closed', formatCm(c.waistSeam.back), formatCm(c.waistSeam.front)],
+		['Hip line', formatCm(c.hipLine.back), formatCm(c.hipLine.front)],
+		['Side seam, waist to hem', formatCm(c.sideSeam.back), formatCm(c.sideSeam.front)],
+		['Dart legs differ by', formatCm(c.dartLegs.back), formatCm(c.dartLegs.front)]
+	];
+	for (const [label, b, fr] of checks) {
+		row(
+			doc,
+			[
+				{ text: label, x: xr, color: PENCIL, maxWidth: wr * 0.55 },
+				{ text: b, x: rB, align: 'right' },
+				{ text: fr, x: xr + wr, align: 'right' }
+			],
+			yr + 8
+		);
+		yr += ROW;
+	}
+	row(
+		doc,
+		[
+			{ text: 'Hem girth, finished', x: xr, color: PENCIL },
+			{ text: formatCm(fig.hemGirth), x: xr + wr, align: 'right' }
+		],
+		yr + 8
+	);
+	yr += ROW;
+	if (fig.waistRadius !== undefined) {
+		row(
+			doc,
+			[
+				{ text: 'Waist radius', x: xr, color: PENCIL },
+				{ text: formatCm(fig.waistRadius), x: xr + wr, align: 'right' }
+			],
+			yr + 8
+		);
+		yr += ROW;
+	}
+	line(doc, 'Side seams sewn together agree within the house easing.', xr, yr + 8, {
+		size: 6.5,
+		color: PENCIL,
+		maxWidth: wr
+	});
+	yr += ROW;
+	return Math.max(y, yr) + 6;
+}
+
+/** How many pieces a cut instruction makes. */
+export const pieceCount = (p: Piece) => (p.cut.onFold ? 1 : p.cut.count);
+
+/** The piece list; returns the y below. */
+export function pieceList(doc: Doc, t: Ticket, f: Frame, top: number): number {
+	const x = f.left;
+	const W = f.right - f.left;
+	let y = heading(doc, 'Piece list', x, top, W);
+	const cols = { n: x, piece: x + 14, fabric: x + W * 0.25, cut: x + W * 0.35, allow: x + W * 0.52, size: f.right };
+	row(
+		doc,
+		[
+			{ text: '#', x: cols.n, color: PENCIL },
+			{ text: 'Piece', x: cols.piece, color: PENCIL },
+			{ text: 'Fabric', x: cols.fabric, color: PENCIL },
+			{ text: 'Cut', x: cols.cut, color: PENCIL },
+			{ text: 'Allowances (cm)', x: cols.allow, color: PENCIL },
+			{ text: 'Cut size (cm)', x: cols.size, align: 'right', color: PENCIL }
+		],
+		y + 7,
+		7
+	);
+	y += ROW - 1;
+	t.draft.pieces.forEach((p, i) => {
+		// Allowances wrap at their separators rather than being cut short.
+		const room = cols.size - cols.allow - 58;
+		const parts = allowanceWords(p).split(' · ');
+		const lines: string[] = [];
+		for (const part of parts) {
+			const last = lines[lines.length - 1];
+			if (last !== undefined && widthOf(doc, `${last} · ${part}`, 8) <= room)
+				lines[lines.length - 1] = `${last} · ${part}`;
+			else lines.push(part);
+		}
+		row(
+			doc,
+			[
+				{ text: String(i + 1), x: cols.n, weight: 600 },
+				{ text: p.name, x: cols.piece, weight: 600, maxWidth: cols.fabric - cols.piece - 6 },
+				{ text: p.fabric === 'lining' ? 'Lining' : 'Skirt fabric', x: cols.fabric },
+				{ text: p.cutText, x: cols.cut, maxWidth: cols.allow - cols.cut - 6 },
+				{ text: lines[0] ?? '', x: cols.allow, maxWidth: room },
+				{ text: cutSize(p), x: cols.size, align: 'right' }
+			],
+			y + 8
+		);
+		for (const more of lines.slice(1)) {
+			y += ROW - 1.5;
+			row(doc, [{ text: more, x: cols.allow, maxWidth: room }], y + 8);
+		}
+		y += ROW;
+	});
+	const shell = t.draft.pieces.filter((p) => p.fabric === 'shell').reduce((a, p) => a + pieceCount(p), 0);
+	const lining = t.draft.pieces.filter((p) => p.fabric === 'lining').reduce((a, p) => a + pieceCount(p), 0);
+	const total = `In all: ${shell} piece${shell === 1 ? '' : 's'} of skirt fabric${lining ? `, ${lining} of lining` : ''}. Allowances are included in the cut size; a fold edge has none.`;
+	line(doc, total, x, y + 8, { size: 6.8, color: PENCIL, maxWidth: W });
+	return y + ROW + 6;
+}

@@ -1,0 +1,99 @@
+// Palette, units and text drawing for the cutting ticket. Every single line of text goes through
+// `line`, which sets it on its baseline in Lora, run by run (see fonts.ts), shrunk or cut to fit.
+import { runsOf, useFont, type Weight } from './fonts';
+
+/** The product palette (DESIGN.md). */
+export const INK = '#1E2230';
+export const CHALK = '#35598A';
+export const THREAD = '#A8323E';
+export const PENCIL = '#6B6F7A';
+export const PAPER = '#F6F1E7';
+
+/** PDF points in a millimetre: 72 points to the inch, 25.4 mm to the inch. */
+export const MM = 72 / 25.4;
+
+/** Page points per centimetre of cloth at a scale 1:n. */
+export const ptPerCm = (n: number) => (10 * MM) / n;
+
+type Doc = PDFKit.PDFDocument;
+
+export interface LineStyle {
+	size: number;
+	weight?: Weight;
+	color?: string;
+	align?: 'left' | 'center' | 'right';
+	/** Shrink (to 80 %), then cut with an ellipsis, to stay within this width. */
+	maxWidth?: number;
+	/** Degrees counter-clockwise as seen on the page (90 reads from the bottom up). */
+	angle?: number;
+	/** y is the middle of the letters rather than the baseline. */
+	middle?: boolean;
+}
+
+/** Width of a line of text at a size. */
+export function widthOf(doc: Doc, text: string, size: number, weight: Weight = 400): number {
+	let w = 0;
+	for (const r of runsOf(text, weight)) w += doc.font(r.font).fontSize(size).widthOfString(r.text);
+	return w;
+}
+
+function fitted(doc: Doc, text: string, s: LineStyle): { text: string; size: number } {
+	const weight = s.weight ?? 400;
+	if (!s.maxWidth || widthOf(doc, text, s.size, weight) <= s.maxWidth) return { text, size: s.size };
+	const size = Math.max(s.size * 0.8, (s.size * s.maxWidth) / widthOf(doc, text, s.size, weight));
+	let t = text;
+	while (t.length > 1 && widthOf(doc, t, size, weight) > s.maxWidth) t = `${t.slice(0, -2).trimEnd()}…`;
+	return { text: t, size };
+}
+
+/** Draws one line of text with its baseline at y; returns its width. */
+export function line(doc: Doc, text: string, x: number, y: number, s: LineStyle): number {
+	const weight = s.weight ?? 400;
+	const f = fitted(doc, text, s);
+	const width = widthOf(doc, f.text, f.size, weight);
+	const start = s.align === 'center' ? -width / 2 : s.align === 'right' ? -width : 0;
+	doc.save();
+	if (s.angle) doc.rotate(-s.angle, { origin: [x, y] });
+	// Lora's capitals stand about 0.7 em tall: half of that puts the letters' middle on y.
+	const base = s.middle ? y + f.size * 0.35 : y;
+	y = base;
+	doc.fillColor(s.color ?? INK);
+	let dx = start;
+	for (const r of runsOf(f.text, weight)) {
+		doc.font(r.font).fontSize(f.size);
+		doc.text(r.text, x + dx, y, { lineBreak: false, baseline: 'alphabetic' });
+		dx += doc.widthOfString(r.text);
+	}
+	doc.restore();
+	return width;
+}
+
+/** A wrapped paragraph (text in the latin subset: our own words and the engine's) from its top; returns its height. */
+export function para(
+	doc: Doc,
+	text: string,
+	x: number,
+	top: number,
+	width: number,
+	s: { size: number; weight?: Weight; color?: string; gap?: number }
+): number {
+	useFont(doc, s.weight ?? 400, s.size);
+	const options = { width, lineGap: s.gap ?? 1 };
+	const h = doc.heightOfString(text, options);
+	doc.fillColor(s.color ?? INK).text(text, x, top, options);
+	return h;
+}
+
+/** A section heading with a hairline under it; returns the y below it. */
+export function heading(doc: Doc, text: string, x: number, top: number, width: number): number {
+	line(doc, text, x, top + 9, { size: 9.5, weight: 600, color: INK });
+	doc
+		.save()
+		.moveTo(x, top + 12.5)
+		.lineTo(x + width, top + 12.5)
+		.lineWidth(0.4)
+		.strokeColor(PENCIL)
+		.stroke()
+		.restore();
+	return top + 17;
+}
