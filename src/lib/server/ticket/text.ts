@@ -30,10 +30,20 @@ export interface LineStyle {
 	middle?: boolean;
 }
 
+// Measuring text shapes it with fontkit every time; a ticket measures the same labels many times
+// while it tries page layouts, so widths are remembered per document.
+const widths = new WeakMap<Doc, Map<string, number>>();
+
 /** Width of a line of text at a size. */
 export function widthOf(doc: Doc, text: string, size: number, weight: Weight = 400): number {
+	let known = widths.get(doc);
+	if (!known) widths.set(doc, (known = new Map()));
+	const key = `${weight}|${size}|${text}`;
+	const hit = known.get(key);
+	if (hit !== undefined) return hit;
 	let w = 0;
 	for (const r of runsOf(text, weight)) w += doc.font(r.font).fontSize(size).widthOfString(r.text);
+	known.set(key, w);
 	return w;
 }
 
