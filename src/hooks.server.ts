@@ -7,9 +7,18 @@ import { securityHeaders } from '$lib/server/hooks/headers';
 import { throttleCredentials } from '$lib/server/hooks/throttle';
 import { handleUnavailableError, unavailable } from '$lib/server/hooks/unavailable';
 import { currentUser } from '$lib/server/hooks/user';
-import { startOutboxWorker } from '$lib/server/mail';
+import { startOutboxWorker, stopOutboxWorker } from '$lib/server/mail';
+import { pool } from '$lib/server/db';
 
-if (!building) startOutboxWorker();
+if (!building) {
+	startOutboxWorker();
+	// adapter-node emits this once the HTTP server has closed: the open database connections would
+	// otherwise keep the process alive after SIGTERM.
+	process.once('sveltekit:shutdown', () => {
+		stopOutboxWorker();
+		void pool.end().catch(() => {});
+	});
+}
 
 export const handle = sequence(unavailable, securityHeaders, throttleCredentials, authHandle, currentUser, guard);
 

@@ -156,3 +156,24 @@ export function onShutdown(/** @type {() => Promise<void>} */ cleanup) {
 	process.on('SIGINT', handler);
 	process.on('SIGTERM', handler);
 }
+
+/**
+ * Stops child processes: SIGTERM, then SIGKILL for any still running after `graceMs`.
+ * @param {import('node:child_process').ChildProcess[]} children
+ */
+export async function stopChildren(children, graceMs = 4000) {
+	const alive = children.filter((c) => c.exitCode === null && c.signalCode === null);
+	await Promise.all(
+		alive.map(
+			(c) =>
+				new Promise((resolve) => {
+					const timer = setTimeout(() => c.kill('SIGKILL'), graceMs);
+					c.once('exit', () => {
+						clearTimeout(timer);
+						resolve(undefined);
+					});
+					c.kill('SIGTERM');
+				})
+		)
+	);
+}

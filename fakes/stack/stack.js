@@ -3,7 +3,7 @@
 // fakes and the built app. npm test and npm run bench each start one, so both run beside npm start.
 import { rmSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { freePort, run, startService, step, done, ROOT } from './bootstrap.js';
+import { freePort, run, startService, step, done, stopChildren, ROOT } from './bootstrap.js';
 import { appEnv, localConfig } from './config.js';
 import { startMariaDB } from '../db/mariadb.js';
 
@@ -19,8 +19,7 @@ export async function startStack(opts) {
 	/** @type {null | (() => Promise<void>)} */
 	let stopDb = null;
 	const stop = async (/** @type {{ keep?: boolean }} */ o = {}) => {
-		for (const c of children.reverse()) c.kill('SIGTERM');
-		await new Promise((r) => setTimeout(r, 300));
+		await stopChildren(children.reverse());
 		if (stopDb) await stopDb();
 		if (!o.keep) rmSync(work, { recursive: true, force: true });
 	};

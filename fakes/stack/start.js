@@ -1,7 +1,7 @@
 // @ts-check
 // `npm start`: from a fresh clone to a running shop with demo data. Node built-ins only until the
 // packages are installed; every step says what it is doing and, if it fails, how to fix it.
-import { ensureDebianPackages, ensurePackages, needsBuild, onShutdown, portInUse, run, startService, step, done } from './bootstrap.js';
+import { ensureDebianPackages, ensurePackages, needsBuild, onShutdown, portInUse, run, startService, step, done, stopChildren } from './bootstrap.js';
 import { appEnv, localConfig } from './config.js';
 import { startMariaDB } from '../db/mariadb.js';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
@@ -98,8 +98,7 @@ Press Ctrl-C to stop; the data stays in .data/ for the next npm start.`);
 
 async function shutdown() {
 	stopping = true;
-	for (const child of children.reverse()) child.kill('SIGTERM');
-	await new Promise((r) => setTimeout(r, 300));
+	await stopChildren(children.reverse());
 	if (stopDb) {
 		console.log('Stopping MariaDB…');
 		await stopDb();

@@ -14,6 +14,13 @@ export function freePort(): Promise<number> {
 	});
 }
 
+// Every app server a test file starts is stopped when the file is done (hooks registered at import
+// time; a hook registered inside a test would never run).
+const started = new Set<() => Promise<void>>();
+afterAll(async () => {
+	await Promise.all([...started].map((stop) => stop()));
+});
+
 /**
  * Another app server from the same build, on its own port, sharing the test database (or pointed
  * elsewhere by `env`): for two-instance, outage and HTTPS-cookie tests. Stopped after the file.
@@ -38,10 +45,15 @@ export async function startAppInstance(env: Record<string, string> = {}, port?: 
 	}
 	const stop = () =>
 		new Promise<void>((resolve) => {
-			if (child.exitCode !== null) return resolve();
-			child.once('exit', () => resolve());
+			started.delete(stop);
+			if (child.exitCode !== null || child.signalCode !== null) return resolve();
+			const kill = setTimeout(() => child.kill('SIGKILL'), 4000);
+			child.once('exit', () => {
+				clearTimeout(kill);
+				resolve();
+			});
 			child.kill('SIGTERM');
 		});
-	afterAll(stop);
+	started.add(stop);
 	return { url, port, origin: env.ORIGIN ?? url, stop, log: () => log };
 }

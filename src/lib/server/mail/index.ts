@@ -25,6 +25,11 @@ export async function deliverQueued(ids: number[]) {
 }
 
 let timer: ReturnType<typeof setInterval> | null = null;
+
+export function stopOutboxWorker() {
+	if (timer) clearInterval(timer);
+	timer = null;
+}
 /** Retries unsent mail in the background of each app server. */
 export function startOutboxWorker(everyMs = Number(env.OUTBOX_INTERVAL_MS ?? 10_000)) {
 	if (timer) return;
