@@ -12,8 +12,3 @@ export function formatDate(value: string | Date | null | undefined, locale = 'en
 export function formatMetres(cm: number) {
 	return `${(cm / 100).toFixed(2)} m`;
 }
-
-/** Whole days from a to b (dates), negative when b is earlier. */
-export function daysBetween(a: Date, b: Date) {
-	return Math.round((b.getTime() - a.getTime()) / 86_400_000);
-}

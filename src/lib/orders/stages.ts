@@ -55,9 +55,5 @@ export function canMove(from: OrderStage, to: OrderStage): boolean {
 	return ALLOWED_MOVES[from].includes(to);
 }
 
-export function isOrderStage(value: unknown): value is OrderStage {
-	return typeof value === 'string' && (ORDER_STAGES as readonly string[]).includes(value);
-}
-
 /** Stages in which an order still waits for the workroom (used for queue length and ship dates). */
 export const OPEN_WORK_STAGES: readonly OrderStage[] = ['paid', 'cutting', 'sewn', 'finished'];

@@ -1,4 +1,4 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { Db } from '../db/client';
 import { fabrics, orderEvents, orderLines, orders, payments, type ShippingAddress } from '../db/schema';
@@ -123,8 +123,4 @@ export async function startPayment(db: Db, stripe: Stripe, orderId: number, orig
 	}
 	await db.insert(payments).values({ orderId, checkoutSessionId: session.id, amount: order.total, currency: order.currency, state: 'open' });
 	return { ok: true as const, url: session.url! };
-}
-
-export async function fabricsByIds(db: Db, ids: number[]) {
-	return ids.length ? db.select().from(fabrics).where(inArray(fabrics.id, ids)) : [];
 }
