@@ -247,3 +247,17 @@ export function subPath(segs: Segment[], from: number, to: number): Segment[] {
 	}
 	return out;
 }
+
+/** The box round a segment's end and control points, which always holds the curve itself. */
+export interface ControlBox {
+	x0: number;
+	x1: number;
+	y0: number;
+	y1: number;
+}
+
+export function controlBox(s: Segment): ControlBox {
+	const xs = s.kind === 'cubic' ? [s.from.x, s.to.x, s.c1.x, s.c2.x] : [s.from.x, s.to.x];
+	const ys = s.kind === 'cubic' ? [s.from.y, s.to.y, s.c1.y, s.c2.y] : [s.from.y, s.to.y];
+	return { x0: Math.min(...xs), x1: Math.max(...xs), y0: Math.min(...ys), y1: Math.max(...ys) };
+}

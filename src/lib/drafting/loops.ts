@@ -1,6 +1,6 @@
 // Tidying a cutting line after the offset: straight runs joined into one line, and the small loops an
 // offset makes inside a bend tighter than its allowance cut out.
-import { cross, derivativeAt, dot, line, split, sub, unit, type Segment } from './geometry';
+import { controlBox, cross, derivativeAt, dot, line, split, sub, unit, type ControlBox, type Segment } from './geometry';
 import { segmentSegment } from './intersect';
 
 /** Smallest radius of curvature of a cubic, sampled at nine points (Infinity for a straight one). */
@@ -45,35 +45,14 @@ export function mergeLines(segs: Segment[]): Segment[] {
 	return out;
 }
 
-interface Box {
-	x0: number;
-	x1: number;
-	y0: number;
-	y1: number;
-}
-
-function box(s: Segment): Box {
-	let x0 = Math.min(s.from.x, s.to.x);
-	let x1 = Math.max(s.from.x, s.to.x);
-	let y0 = Math.min(s.from.y, s.to.y);
-	let y1 = Math.max(s.from.y, s.to.y);
-	if (s.kind === 'cubic') {
-		x0 = Math.min(x0, s.c1.x, s.c2.x);
-		x1 = Math.max(x1, s.c1.x, s.c2.x);
-		y0 = Math.min(y0, s.c1.y, s.c2.y);
-		y1 = Math.max(y1, s.c1.y, s.c2.y);
-	}
-	return { x0, x1, y0, y1 };
-}
-
-const apart = (a: Box, b: Box) => b.x0 > a.x1 + 1e-9 || b.x1 < a.x0 - 1e-9 || b.y0 > a.y1 + 1e-9 || b.y1 < a.y0 - 1e-9;
+const apart = (a: ControlBox, b: ControlBox) => b.x0 > a.x1 + 1e-9 || b.x1 < a.x0 - 1e-9 || b.y0 > a.y1 + 1e-9 || b.y1 < a.y0 - 1e-9;
 
 /** Cuts out the small loops an offset makes where a curve bends tighter than its allowance (the
  * "swallowtail" inside a sharp inward bend): where the line crosses itself within a few segments, the
  * part between the crossings goes and the two ends meet at the crossing. */
 export function removeLoops(input: Segment[]): Segment[] {
 	const segs = [...input];
-	let boxes = segs.map(box);
+	let boxes = segs.map(controlBox);
 	const WINDOW = 12;
 	for (let i = 0; i < segs.length; i++) {
 		for (let k = 1; k <= WINDOW && k < segs.length - 1; k++) {
@@ -93,7 +72,7 @@ export function removeLoops(input: Segment[]): Segment[] {
 				segs.splice(i, segs.length - i, keepHead);
 				segs.splice(0, j + 1, keepTail);
 			}
-			boxes = segs.map(box);
+			boxes = segs.map(controlBox);
 			i = Math.max(-1, i - 2);
 			break;
 		}

@@ -1,6 +1,6 @@
 // From outline to cuttable piece: the seam line set to run one way, the cutting line offset from it by
 // each edge's allowance, notches moved out to the cutting line, grain line, fold, labels.
-import { add, dist, dot, sub, mul, normalOf, pointAt, segmentLength, tangentAt, type ClosedPath, type Edge, type Point, type Segment } from './geometry';
+import { add, controlBox, dist, dot, sub, mul, normalOf, pointAt, segmentLength, tangentAt, type ClosedPath, type Edge, type Point, type Segment } from './geometry';
 import { boundsOf, flatten, orientPositive, type Bounds } from './outline';
 import { cuttingLine } from './offset';
 import type { ResolvedChoice } from './options';
@@ -92,16 +92,7 @@ export const cutText = (c: CutInstruction) => (c.onFold ? 'Cut 1 on the fold' : 
 
 /** How far p lies outside a segment's control box (0 inside it). */
 function boxGap(s: Segment, p: Point): number {
-	let x0 = Math.min(s.from.x, s.to.x);
-	let x1 = Math.max(s.from.x, s.to.x);
-	let y0 = Math.min(s.from.y, s.to.y);
-	let y1 = Math.max(s.from.y, s.to.y);
-	if (s.kind === 'cubic') {
-		x0 = Math.min(x0, s.c1.x, s.c2.x);
-		x1 = Math.max(x1, s.c1.x, s.c2.x);
-		y0 = Math.min(y0, s.c1.y, s.c2.y);
-		y1 = Math.max(y1, s.c1.y, s.c2.y);
-	}
+	const { x0, x1, y0, y1 } = controlBox(s);
 	return Math.max(x0 - p.x, p.x - x1, y0 - p.y, p.y - y1, 0);
 }
 
