@@ -1,12 +1,10 @@
 import { error, fail } from '@sveltejs/kit';
 import { z } from 'zod';
-import { stageSchema } from '$lib/forms/stage';
 import { db } from '$lib/server/db';
 import { orderEvents } from '$lib/server/db/schema';
-import { deliverQueued } from '$lib/server/mail';
 import { requestRefund } from '$lib/server/admin/refund';
 import { stripe } from '$lib/server/payments/stripe';
-import { workroomMove } from '$lib/server/workroom/moves';
+import { moveFromForm } from '$lib/server/workroom/move-action';
 import { staffOrder } from '$lib/server/workroom/order';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -36,14 +34,5 @@ export const actions: Actions = {
 		if (!r.ok) return fail(400, { message: r.message });
 		return { message: 'Refund sent to the payment service; the order updates when it confirms.' };
 	},
-	move: async ({ params, request, locals }) => {
-		const form = Object.fromEntries(await request.formData());
-		const parsed = stageSchema.safeParse({ ...form, overrideStock: form.overrideStock === 'on' });
-		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
-		const user = locals.user!;
-		const result = await workroomMove(db, { orderId: Number(params.id), ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
-		if (!result.ok) return fail(result.status, { message: result.message });
-		void deliverQueued(result.mailIds);
-		return { message: 'Stage changed.' };
-	}
+	move: moveFromForm
 };

@@ -1,8 +1,6 @@
-import { error, fail } from '@sveltejs/kit';
-import { stageSchema } from '$lib/forms/stage';
+import { error } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { deliverQueued } from '$lib/server/mail';
-import { workroomMove } from '$lib/server/workroom/moves';
+import { moveFromForm } from '$lib/server/workroom/move-action';
 import { staffOrder } from '$lib/server/workroom/order';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -13,14 +11,5 @@ export const load: PageServerLoad = async ({ params }) => {
 };
 
 export const actions: Actions = {
-	move: async ({ params, request, locals }) => {
-		const form = Object.fromEntries(await request.formData());
-		const parsed = stageSchema.safeParse({ ...form, overrideStock: form.overrideStock === 'on' });
-		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
-		const user = locals.user!;
-		const result = await workroomMove(db, { orderId: Number(params.id), ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
-		if (!result.ok) return fail(result.status, { message: result.message });
-		void deliverQueued(result.mailIds);
-		return { moved: result.order.status };
-	}
+	move: moveFromForm
 };
