@@ -1,5 +1,6 @@
 import {
 	boolean,
+	customType,
 	date,
 	datetime,
 	decimal,
@@ -29,6 +30,13 @@ const updated = () =>
 		.default(sql`CURRENT_TIMESTAMP(3)`)
 		.$onUpdate(() => new Date());
 
+// E-mail addresses compare byte for byte: the default collation is accent- and case-insensitive, which
+// would let "priyá@…" find the account of "priya@…". Addresses are normalised before they are stored
+// (auth/email.ts), so an exact comparison is the right one.
+const exactVarchar = customType<{ data: string; config: { length: number } }>({
+	dataType: (config) => `varchar(${config?.length ?? 255}) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin`
+});
+
 export const ROLES = ['shopper', 'cutter', 'owner'] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -38,12 +46,15 @@ export const users = mysqlTable('user', {
 		.primaryKey()
 		.$defaultFn(() => crypto.randomUUID()),
 	name: varchar('name', { length: 255 }),
-	email: varchar('email', { length: 255 }).unique(),
+	email: exactVarchar('email', { length: 255 }).unique(),
 	emailVerified: timestamp('emailVerified', { mode: 'date', fsp: 3 }),
 	image: varchar('image', { length: 255 }),
 	role: mysqlEnum('role', ROLES).notNull().default('shopper'),
 	passwordHash: varchar('password_hash', { length: 255 }),
 	disabledAt: timestamp('disabled_at', { fsp: 3 }),
+	// Carried in the session cookie and compared on every request: raising it (sign-out, switching the
+	// account off, a new password) ends every session of this person at once, on every app server.
+	sessionVersion: int('session_version').notNull().default(0),
 	createdAt: created(),
 	updatedAt: updated()
 });
@@ -83,7 +94,7 @@ export const sessions = mysqlTable(
 export const verificationTokens = mysqlTable(
 	'verificationToken',
 	{
-		identifier: varchar('identifier', { length: 255 }).notNull(),
+		identifier: exactVarchar('identifier', { length: 255 }).notNull(),
 		token: varchar('token', { length: 255 }).notNull(),
 		expires: timestamp('expires', { mode: 'date' }).notNull()
 	},
@@ -101,6 +112,15 @@ export const signInAttempts = mysqlTable(
 	},
 	(t) => [index('sign_in_attempt_email_idx').on(t.email, t.createdAt)]
 );
+
+// Fixed-window counters for rate limits (sign-in per e-mail and per client, orders per client and per
+// e-mail). One row per key, changed by one atomic upsert, so concurrent requests cannot both slip under
+// the limit and every app server counts alike.
+export const rateCounters = mysqlTable('rate_counter', {
+	key: varchar('key', { length: 191 }).primaryKey(),
+	hits: int('hits').notNull(),
+	windowStart: timestamp('window_start', { fsp: 3 }).notNull()
+});
 
 // A shopper's saved set of measurements ("measure card"). Body measurements are personal data:
 // the consent time is kept, and the shopper can export or delete them.
@@ -225,6 +245,9 @@ export const orders = mysqlTable(
 		shippingAddress: json('shipping_address').$type<ShippingAddress>().notNull(),
 		carrier: varchar('carrier', { length: 60 }),
 		trackingNumber: varchar('tracking_number', { length: 80 }),
+		// Sent by the checkout form; a second submit of the same form (double click, retry) finds this order
+		// instead of placing another.
+		checkoutKey: varchar('checkout_key', { length: 64 }).unique(),
 		houseRulesId: int('house_rules_id')
 			.notNull()
 			.references(() => houseRules.id),
@@ -278,7 +301,7 @@ export const orderEvents = mysqlTable(
 			.references(() => orders.id, { onDelete: 'cascade' }),
 		actorId: varchar('actor_id', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
 		actorLabel: varchar('actor_label', { length: 120 }).notNull(),
-		kind: mysqlEnum('kind', ['stage', 'note', 'refund', 'mail']).notNull().default('stage'),
+		kind: mysqlEnum('kind', ['stage', 'note', 'refund', 'mail', 'payment']).notNull().default('stage'),
 		fromStatus: mysqlEnum('from_status', ORDER_STAGES),
 		toStatus: mysqlEnum('to_status', ORDER_STAGES),
 		note: text('note'),
