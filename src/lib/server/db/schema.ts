@@ -1,6 +1,5 @@
 import {
 	boolean,
-	customType,
 	date,
 	datetime,
 	decimal,
@@ -30,13 +29,6 @@ const updated = () =>
 		.default(sql`CURRENT_TIMESTAMP(3)`)
 		.$onUpdate(() => new Date());
 
-// E-mail addresses compare byte for byte: the default collation is accent- and case-insensitive, which
-// would let "priyá@…" find the account of "priya@…". Addresses are normalised before they are stored
-// (auth/email.ts), so an exact comparison is the right one.
-const exactVarchar = customType<{ data: string; config: { length: number } }>({
-	dataType: (config) => `varchar(${config?.length ?? 255}) CHARACTER SET utf8mb4 COLLATE utf8mb4_bin`
-});
-
 export const ROLES = ['shopper', 'cutter', 'owner'] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -46,7 +38,11 @@ export const users = mysqlTable('user', {
 		.primaryKey()
 		.$defaultFn(() => crypto.randomUUID()),
 	name: varchar('name', { length: 255 }),
-	email: exactVarchar('email', { length: 255 }).unique(),
+	// Compared byte for byte (utf8mb4_bin, set in migration 0001; drizzle-kit does not track collations,
+	// so keep it if this column is ever changed): the default collation is accent- and case-insensitive,
+	// which would let "priyá@…" find the account of "priya@…". Addresses are normalised before they are
+	// stored, so an exact comparison is the right one.
+	email: varchar('email', { length: 255 }).unique(),
 	emailVerified: timestamp('emailVerified', { mode: 'date', fsp: 3 }),
 	image: varchar('image', { length: 255 }),
 	role: mysqlEnum('role', ROLES).notNull().default('shopper'),
@@ -94,7 +90,8 @@ export const sessions = mysqlTable(
 export const verificationTokens = mysqlTable(
 	'verificationToken',
 	{
-		identifier: exactVarchar('identifier', { length: 255 }).notNull(),
+		// utf8mb4_bin like user.email (migration 0001).
+		identifier: varchar('identifier', { length: 255 }).notNull(),
 		token: varchar('token', { length: 255 }).notNull(),
 		expires: timestamp('expires', { mode: 'date' }).notNull()
 	},
