@@ -9,7 +9,7 @@ declare global {
 			user: { id: string; email: string; name: string; role: Role } | null;
 		}
 		interface PageData {
-			user?: { name: string; email: string; role: Role } | null;
+			user?: { name: string; role: Role } | null;
 		}
 	}
 }

@@ -2,6 +2,7 @@ import { readBag } from '$lib/server/shop/bag';
 import type { LayoutServerLoad } from './$types';
 
 export const load: LayoutServerLoad = ({ locals, cookies }) => ({
-	user: locals.user ? { name: locals.user.name, email: locals.user.email, role: locals.user.role } : null,
+	// Her name and role for the header; nothing else about the person rides along on every page.
+	user: locals.user ? { name: locals.user.name, role: locals.user.role } : null,
 	bagCount: readBag(cookies).length
 });

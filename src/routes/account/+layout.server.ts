@@ -1,5 +1,8 @@
-import { requireRole } from '$lib/server/hooks/require';
+import { requireRole, SIGNED_IN } from '$lib/server/access';
 import type { LayoutServerLoad } from './$types';
 
-// The hooks guard every path under /account already; this keeps the page data typed with the user.
-export const load: LayoutServerLoad = ({ locals, url }) => ({ staffUser: requireRole(locals, url, ['shopper', 'cutter', 'owner']) });
+// The hooks guard the account's routes already; asking again here types the page data with the viewer.
+export const load: LayoutServerLoad = (event) => {
+	const { name, role } = requireRole(event, SIGNED_IN);
+	return { staffUser: { name, role } };
+};

@@ -4,11 +4,14 @@ import { db } from '$lib/server/db';
 import { measurementProfiles, orders } from '$lib/server/db/schema';
 import { deleteMeasurements } from '$lib/server/shop/personal-data';
 import type { Actions, PageServerLoad } from './$types';
+import { requireRole, SIGNED_IN } from '$lib/server/access';
 
-export const load: PageServerLoad = async ({ locals }) => {
-	const userId = locals.user!.id;
+export const load: PageServerLoad = async (event) => {
+	const userId = requireRole(event, SIGNED_IN).id;
 	const [cards, myOrders] = await Promise.all([
-		db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
+		db
+			.select({ id: measurementProfiles.id, name: measurementProfiles.name, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip })
+			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
 		db
 			.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })
 			.from(orders)
@@ -20,15 +23,16 @@ export const load: PageServerLoad = async ({ locals }) => {
 };
 
 export const actions: Actions = {
-	deleteCard: async ({ request, locals }) => {
-		const id = Number((await request.formData()).get('id'));
+	deleteCard: async (event) => {
+		const user = requireRole(event, SIGNED_IN);
+		const id = Number((await event.request.formData()).get('id'));
 		if (!Number.isInteger(id)) return fail(400, { message: 'No such card.' });
 		// Only her own card: the user id is part of the condition.
-		await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, locals.user!.id)));
+		await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
 		return { message: 'Measure card deleted.' };
 	},
-	deleteMeasurements: async ({ locals }) => {
-		const r = await deleteMeasurements(db, locals.user!.id);
+	deleteMeasurements: async (event) => {
+		const r = await deleteMeasurements(db, requireRole(event, SIGNED_IN).id);
 		return {
 			message: `Deleted ${r.cards} measure card${r.cards === 1 ? '' : 's'} and the measurements of ${r.cleared} finished order${r.cleared === 1 ? '' : 's'}.${r.kept ? ` We keep them for ${r.kept} order${r.kept === 1 ? '' : 's'} still being made, and delete them when you ask again after it ships.` : ''}`
 		};

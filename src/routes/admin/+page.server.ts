@@ -4,8 +4,10 @@ import { orders, users } from '$lib/server/db/schema';
 import { pipelineBoard, weeklyFigures } from '$lib/server/admin/pipeline';
 import { lowStockFabrics } from '$lib/server/stats';
 import type { PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async () => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
 	const [board, weeks, lowStock, staff, takings] = await Promise.all([
 		pipelineBoard(db),
 		weeklyFigures(db),

@@ -7,9 +7,9 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async ({ cookies }) => ({ bag: await viewBag(db, readBag(cookies)) });
 
 export const actions: Actions = {
-	remove: async ({ request, cookies, url }) => {
+	remove: async ({ request, cookies }) => {
 		const id = String((await request.formData()).get('id') ?? '');
-		writeBag(cookies, readBag(cookies).filter((i) => i.id !== id), url.protocol === 'https:');
+		writeBag(cookies, readBag(cookies).filter((i) => i.id !== id));
 		redirect(303, '/bag');
 	}
 };

@@ -1,5 +1,8 @@
-import { requireRole } from '$lib/server/hooks/require';
+import { requireRole, STAFF } from '$lib/server/access';
 import type { LayoutServerLoad } from './$types';
 
-// The hooks guard every path under /workroom already; this keeps the page data typed with the user.
-export const load: LayoutServerLoad = ({ locals, url }) => ({ staffUser: requireRole(locals, url, ['cutter', 'owner']) });
+// The hooks guard the workroom's routes already; asking again here types the page data with the viewer.
+export const load: LayoutServerLoad = (event) => {
+	const { name, role } = requireRole(event, STAFF);
+	return { staffUser: { name, role } };
+};

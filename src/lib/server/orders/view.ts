@@ -7,14 +7,16 @@ export type Viewer = App.Locals['user'];
 
 /**
  * An order as its shopper sees it, or null when this viewer may not see it: the signed-in owner of
- * the order, anyone holding the signed link from the e-mail, or staff. A wrong id or token looks
+ * the order, anyone holding the signed link from the e-mail, or the owner. A wrong id or token looks
  * exactly like a missing order, so order numbers cannot be probed.
  */
 export async function orderForShopper(db: Db, number: string, viewer: Viewer, token: string | null) {
 	const [order] = await db.select().from(orders).where(eq(orders.number, number)).limit(1);
 	if (!order) return null;
 	const mine = viewer && order.userId === viewer.id;
-	const staff = viewer && (viewer.role === 'cutter' || viewer.role === 'owner');
+	// The owner answers questions about any order; the workroom sees orders through its own pages, with a
+	// first name and no contact details.
+	const staff = viewer?.role === 'owner';
 	if (!mine && !staff && !checkOrderToken(order.number, token)) return null;
 	const [lines, events] = await Promise.all([
 		db

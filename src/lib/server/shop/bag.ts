@@ -1,6 +1,7 @@
 import type { Cookies } from '@sveltejs/kit';
 import { z } from 'zod';
 import { bagItemSchema, type BagItem } from '../../forms/quote';
+import { servedOverHttps } from '../site';
 
 // The bag lives in the shopper's own browser as an httpOnly cookie: nothing is stored for her on the
 // server until she checks out, and the server prices every item again from the database then.
@@ -19,12 +20,12 @@ export function readBag(cookies: Cookies): BagItem[] {
 	}
 }
 
-export function writeBag(cookies: Cookies, items: BagItem[], secure: boolean) {
-	cookies.set(COOKIE, JSON.stringify(items.slice(0, MAX_ITEMS)), { path: '/', httpOnly: true, sameSite: 'lax', secure, maxAge: 60 * 60 * 24 * 30 });
+export function writeBag(cookies: Cookies, items: BagItem[]) {
+	cookies.set(COOKIE, JSON.stringify(items.slice(0, MAX_ITEMS)), { path: '/', httpOnly: true, sameSite: 'lax', secure: servedOverHttps(), maxAge: 60 * 60 * 24 * 30 });
 }
 
 export function clearBag(cookies: Cookies) {
-	cookies.delete(COOKIE, { path: '/' });
+	cookies.delete(COOKIE, { path: '/', secure: servedOverHttps() });
 }
 
 export { MAX_ITEMS };

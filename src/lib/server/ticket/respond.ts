@@ -3,6 +3,7 @@
 import { DraftInputError } from '../../drafting';
 import type { Db } from '../db/client';
 import { shopSettingsOf } from '../shop/rules';
+import { siteOrigin } from '../site';
 import { loadTickets } from './load';
 import { renderTickets } from './pdf';
 
@@ -38,7 +39,7 @@ const safe = (s: string) => s.replace(/[^A-Za-z0-9-]+/g, '-');
 
 /** The tickets of the orders as one PDF, or 404 naming the ids with no order, or 422 when an order's
  * stored measurements no longer draft. */
-export async function ticketsResponse(db: Db, ids: number[], origin: string): Promise<Response> {
+export async function ticketsResponse(db: Db, ids: number[]): Promise<Response> {
 	let found;
 	try {
 		found = await loadTickets(db, ids);
@@ -56,7 +57,7 @@ export async function ticketsResponse(db: Db, ids: number[], origin: string): Pr
 	const tickets = orders.flatMap((o) => o.tickets);
 	if (!tickets.length) return message(404, 'These orders have no skirts to cut.');
 	const { paperSize } = await shopSettingsOf(db);
-	const pdf = await renderTickets(tickets, { paper: paperSize === 'Letter' ? 'Letter' : 'A4', origin });
+	const pdf = await renderTickets(tickets, { paper: paperSize === 'Letter' ? 'Letter' : 'A4', origin: siteOrigin() });
 	const numbers = orders.map((o) => o.number);
 	const name =
 		numbers.length === 1
@@ -73,7 +74,5 @@ export async function ticketsResponse(db: Db, ids: number[], origin: string): Pr
 	});
 }
 
-/** 404 for an id that cannot be an order. */
-export const noOrder = (raw: string) => message(404, `There is no order ${JSON.stringify(raw)}.`);
 /** 400 for a batch that cannot be read. */
 export const badBatch = (problem: string) => message(400, problem);

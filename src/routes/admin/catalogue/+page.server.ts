@@ -1,4 +1,8 @@
 import { catalogueLists } from './catalogue.server';
 import type { PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = () => catalogueLists();
+export const load: PageServerLoad = (event) => {
+	requireRole(event, OWNER);
+	return catalogueLists();
+};

@@ -1,10 +1,12 @@
 import { db } from '$lib/server/db';
 import { allOrders, readFilter, toCsv } from '$lib/server/admin/orders';
 import type { RequestHandler } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-// The same filters as the orders table; the hooks let only the owner in.
-export const GET: RequestHandler = async ({ url }) => {
-	const rows = await allOrders(db, readFilter(url));
+// The same filters as the orders table: every shopper's name and e-mail, for the owner only.
+export const GET: RequestHandler = async (event) => {
+	requireRole(event, OWNER);
+	const rows = await allOrders(db, readFilter(event.url));
 	const csv = toCsv(
 		rows.map((r) => ({ ...r, total: (r.total / 100).toFixed(2), refundedTotal: (r.refundedTotal / 100).toFixed(2) })),
 		['number', 'createdAt', 'status', 'shopperName', 'email', 'currency', 'total', 'refundedTotal', 'promisedDate']

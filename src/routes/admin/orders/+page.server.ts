@@ -1,8 +1,10 @@
 import { db } from '$lib/server/db';
 import { readFilter, searchOrders } from '$lib/server/admin/orders';
 import type { PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async ({ url }) => {
-	const filter = readFilter(url);
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
+	const filter = readFilter(event.url);
 	return { filter, ...(await searchOrders(db, filter)) };
 };

@@ -7,8 +7,10 @@ import { houseRules, users } from '$lib/server/db/schema';
 import { currentRules } from '$lib/server/shop/rules';
 import { sampleDrawing } from '$lib/server/shop/sample';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async () => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
 	const { id, rules } = await currentRules(db);
 	const versions = await db
 		.select({ id: houseRules.id, note: houseRules.note, createdAt: houseRules.createdAt, by: users.name })
@@ -25,8 +27,9 @@ export const load: PageServerLoad = async () => {
 };
 
 export const actions: Actions = {
-	default: async ({ request, locals }) => {
-		const form = Object.fromEntries(await request.formData());
+	default: async (event) => {
+		const user = requireRole(event, OWNER);
+		const form = Object.fromEntries(await event.request.formData());
 		const note = String(form.note ?? '').trim().slice(0, 255);
 		const { rules: base } = await currentRules(db);
 		let rules;
@@ -38,7 +41,7 @@ export const actions: Actions = {
 		}
 		if (!note) return fail(400, { message: 'Say in a few words what changed and why: the note stays with every order drafted with these rules.', errors: {} });
 		// A new version: orders already placed keep the rules they were drafted with.
-		const [{ id }] = await db.insert(houseRules).values({ rules: rules as unknown as Record<string, unknown>, note, createdBy: locals.user!.id }).$returningId();
+		const [{ id }] = await db.insert(houseRules).values({ rules: rules as unknown as Record<string, unknown>, note, createdBy: user.id }).$returningId();
 		return { message: `Saved as version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };

@@ -6,6 +6,7 @@ import { users } from '$lib/server/db/schema';
 import { inviteSchema } from '$lib/forms/staff';
 import { inviteCutter } from './invite.server';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
 const account = {
 	id: users.id,
@@ -19,7 +20,9 @@ const account = {
 // LIKE treats % and _ as wildcards: a search for "a_b" means those three characters.
 const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-export const load: PageServerLoad = async ({ url }) => {
+export const load: PageServerLoad = async (event) => {
+	const me = requireRole(event, OWNER);
+	const { url } = event;
 	const q = (url.searchParams.get('q') ?? '').trim().slice(0, 100);
 	const [staff, found] = await Promise.all([
 		db
@@ -40,6 +43,7 @@ export const load: PageServerLoad = async ({ url }) => {
 		form: await superValidate(zod4(inviteSchema)),
 		staff,
 		q,
+		me: me.id,
 		found: found?.slice(0, 25) ?? null,
 		more: (found?.length ?? 0) > 25
 	};
@@ -47,6 +51,7 @@ export const load: PageServerLoad = async ({ url }) => {
 
 export const actions: Actions = {
 	invite: async (event) => {
+		requireRole(event, OWNER);
 		const form = await superValidate(event.request, zod4(inviteSchema));
 		if (!form.valid) return fail(400, { form });
 		const outcome = await inviteCutter(event, form.data.email, form.data.name);

@@ -1,5 +1,9 @@
 import { db } from '$lib/server/db';
+import { requireRole, STAFF } from '$lib/server/access';
 import { lays } from '$lib/server/workroom/queue';
 import type { PageServerLoad } from './$types';
 
-export const load: PageServerLoad = async () => ({ lays: await lays(db) });
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, STAFF);
+	return { lays: await lays(db) };
+};

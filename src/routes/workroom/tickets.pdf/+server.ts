@@ -1,11 +1,13 @@
 import { db } from '$lib/server/db';
+import { requireRole, STAFF } from '$lib/server/access';
 import { badBatch, parseIds, ticketsResponse } from '$lib/server/ticket/respond';
 import type { RequestHandler } from './$types';
 
 // Several orders' cutting tickets in one PDF: /workroom/tickets.pdf?ids=1,2,3, or ?ids=1&ids=2 as the
-// queue's checkboxes send them. Guarded by the hooks like every path under /workroom.
-export const GET: RequestHandler = async ({ url }) => {
-	const parsed = parseIds(url.searchParams.getAll('ids').join(','));
+// queue's checkboxes send them.
+export const GET: RequestHandler = async (event) => {
+	requireRole(event, STAFF);
+	const parsed = parseIds(event.url.searchParams.getAll('ids').join(','));
 	if ('problem' in parsed) return badBatch(parsed.problem);
-	return ticketsResponse(db, parsed.ids, url.origin);
+	return ticketsResponse(db, parsed.ids);
 };

@@ -1,6 +1,11 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
+import { requireRole, STAFF } from '$lib/server/access';
 import { workQueue } from '$lib/server/workroom/queue';
+import type { RequestHandler } from './$types';
 
 // The queue page polls this so the list stays current without a reload.
-export const GET = async () => json({ queue: await workQueue(db), at: new Date().toISOString() }, { headers: { 'cache-control': 'no-store' } });
+export const GET: RequestHandler = async (event) => {
+	requireRole(event, STAFF);
+	return json({ queue: await workQueue(db), at: new Date().toISOString() });
+};

@@ -1,9 +1,12 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
+import { requireRole, STAFF } from '$lib/server/access';
 import { lowStockFabrics, stageCounts } from '$lib/server/stats';
+import type { RequestHandler } from './$types';
 
-// Figures for the workroom's own screens; the hooks let only cutters and the owner in.
-export const GET = async () => {
+// Figures for the workroom's own screens.
+export const GET: RequestHandler = async (event) => {
+	requireRole(event, STAFF);
 	const [counts, lowStock] = await Promise.all([stageCounts(db), lowStockFabrics(db)]);
 	return json({ stages: Object.fromEntries(counts.map((c) => [c.stage, c.count])), lowStock });
 };

@@ -3,8 +3,10 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { fabricSchema } from '$lib/forms/catalogue';
 import { saveFabric } from '../../fabric-save.server';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async () => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
 	const form = await superValidate(zod4(fabricSchema));
 	// A neutral starting colour and the figures most bolts share, so the owner changes only what differs.
 	form.data.swatchHex = '#8a7f72';
@@ -13,5 +15,8 @@ export const load: PageServerLoad = async () => {
 };
 
 export const actions: Actions = {
-	save: (event) => saveFabric(event, null)
+	save: (event) => {
+		requireRole(event, OWNER);
+		return saveFabric(event, null);
+	}
 };

@@ -3,8 +3,10 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { styleSchema } from '$lib/forms/catalogue';
 import { saveStyle } from '../../style-save.server';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async () => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
 	const form = await superValidate(zod4(styleSchema));
 	// Options cost nothing extra until the owner says otherwise; most styles take about a week.
 	Object.assign(form.data, {
@@ -20,5 +22,8 @@ export const load: PageServerLoad = async () => {
 };
 
 export const actions: Actions = {
-	save: (event) => saveStyle(event, null)
+	save: (event) => {
+		requireRole(event, OWNER);
+		return saveStyle(event, null);
+	}
 };

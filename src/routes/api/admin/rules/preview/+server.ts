@@ -5,10 +5,12 @@ import { db } from '$lib/server/db';
 import { currentRules } from '$lib/server/shop/rules';
 import { SAMPLE_FIGURE } from '$lib/server/shop/sample';
 import type { RequestHandler } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
 // The house-rules page's live sample drawing: draws the sample figure with the rules being edited.
-export const POST: RequestHandler = async ({ request }) => {
-	const body = await request.json().catch(() => null);
+export const POST: RequestHandler = async (event) => {
+	requireRole(event, OWNER);
+	const body = await event.request.json().catch(() => null);
 	if (!body || typeof body !== 'object') return json({ message: 'Send the rules as JSON.' }, { status: 400 });
 	try {
 		const rules = resolveRules(rulesFromForm(body as Record<string, unknown>, (await currentRules(db)).rules));

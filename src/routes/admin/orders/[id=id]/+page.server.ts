@@ -5,11 +5,13 @@ import { orderEvents } from '$lib/server/db/schema';
 import { requestRefund } from '$lib/server/admin/refund';
 import { stripe } from '$lib/server/payments/stripe';
 import { moveFromForm } from '$lib/server/workroom/move-action';
-import { staffOrder } from '$lib/server/workroom/order';
+import { orderForOwner } from '$lib/server/workroom/order';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
-export const load: PageServerLoad = async ({ params }) => {
-	const found = await staffOrder(db, Number(params.id));
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
+	const found = await orderForOwner(db, Number(event.params.id));
 	if (!found) error(404, 'No such order.');
 	return found;
 };
@@ -20,19 +22,23 @@ const refundSchema = z.object({
 });
 
 export const actions: Actions = {
-	note: async ({ params, request, locals }) => {
-		const note = String((await request.formData()).get('note') ?? '').trim();
+	note: async (event) => {
+		const user = requireRole(event, OWNER);
+		const { params } = event;
+		const note = String((await event.request.formData()).get('note') ?? '').trim();
 		if (!note) return fail(400, { message: 'Write the note first.' });
 		if (note.length > 2000) return fail(400, { message: 'Keep a note under 2000 characters.' });
-		await db.insert(orderEvents).values({ orderId: Number(params.id), actorId: locals.user!.id, actorLabel: locals.user!.name, kind: 'note', note });
+		await db.insert(orderEvents).values({ orderId: Number(params.id), actorId: user.id, actorLabel: user.name, kind: 'note', note });
 		return { message: 'Note added.' };
 	},
-	refund: async ({ params, request, locals }) => {
-		const parsed = refundSchema.safeParse(Object.fromEntries(await request.formData()));
+	refund: async (event) => {
+		const user = requireRole(event, OWNER);
+		const { params } = event;
+		const parsed = refundSchema.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
-		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: locals.user!.id, label: locals.user!.name }, parsed.data.reason);
+		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: user.id, label: user.name }, parsed.data.reason);
 		if (!r.ok) return fail(400, { message: r.message });
 		return { message: 'Refund sent to the payment service; the order updates when it confirms.' };
 	},
-	move: moveFromForm
+	move: (event) => moveFromForm(event, OWNER)
 };

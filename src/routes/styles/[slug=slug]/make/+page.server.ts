@@ -30,7 +30,7 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 };
 
 export const actions: Actions = {
-	add: async ({ request, params, cookies, locals, url }) => {
+	add: async ({ request, params, cookies, locals }) => {
 		const form = await superValidate(request, zod4(makeFormSchema));
 		if (!form.valid) return fail(400, { form });
 		const item = bagItemFrom(params.slug, form.data);
@@ -45,7 +45,7 @@ export const actions: Actions = {
 			const m = item.measurements;
 			await db.insert(measurementProfiles).values({ userId: locals.user.id, name: form.data.cardName, waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip ?? null, units: item.units, consentAt: new Date() });
 		}
-		writeBag(cookies, [...bag, item], url.protocol === 'https:');
+		writeBag(cookies, [...bag, item]);
 		redirect(303, '/bag');
 	}
 };

@@ -1,6 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { fieldErrors } from '$lib/forms/errors';
 import { stageSchema } from '$lib/forms/stage';
+import { requireRole, STAFF } from '$lib/server/access';
 import { db } from '$lib/server/db';
 import { deliverQueued } from '$lib/server/mail';
 import { workroomMove } from '$lib/server/workroom/moves';
@@ -8,13 +9,12 @@ import type { RequestHandler } from './$types';
 
 // POST { to, note?, carrier?, tracking?, overrideStock? }: 200 with the new stage, 409 when the
 // move is not allowed from the order's stage (or another cutter got there first).
-export const POST: RequestHandler = async ({ params, request, locals }) => {
-	const id = Number(params.id);
-	if (!Number.isInteger(id) || id <= 0) return json({ message: 'No such order.' }, { status: 404 });
-	const body = await request.json().catch(() => null);
+export const POST: RequestHandler = async (event) => {
+	const user = requireRole(event, STAFF);
+	const id = Number(event.params.id);
+	const body = await event.request.json().catch(() => null);
 	const parsed = stageSchema.safeParse(body);
 	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
-	const user = locals.user!;
 	const result = await workroomMove(db, { orderId: id, ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
 	if (!result.ok) return json({ message: result.message }, { status: result.status });
 	void deliverQueued(result.mailIds);

@@ -8,6 +8,7 @@ import { fabricSchema } from '$lib/forms/catalogue';
 import { fabricFormData, idParam } from '../../catalogue.server';
 import { saveFabric } from '../../fabric-save.server';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
 async function fabricFor(idText: string) {
 	const id = idParam(idText);
@@ -16,7 +17,9 @@ async function fabricFor(idText: string) {
 	return row;
 }
 
-export const load: PageServerLoad = async ({ params, url }) => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
+	const { params, url } = event;
 	const fabric = await fabricFor(params.id);
 	return {
 		form: await superValidate(fabricFormData(fabric), zod4(fabricSchema), { errors: false }),
@@ -32,8 +35,13 @@ export const load: PageServerLoad = async ({ params, url }) => {
 };
 
 export const actions: Actions = {
-	save: async (event) => saveFabric(event, await fabricFor(event.params.id)),
-	retire: async ({ params }) => {
+	save: async (event) => {
+		requireRole(event, OWNER);
+		return saveFabric(event, await fabricFor(event.params.id));
+	},
+	retire: async (event) => {
+		requireRole(event, OWNER);
+		const { params } = event;
 		const fabric = await fabricFor(params.id);
 		if (fabric.retiredAt) return fail(409, { notice: 'This fabric is retired already.' });
 		await db.update(fabrics).set({ retiredAt: new Date() }).where(eq(fabrics.id, fabric.id));
@@ -41,7 +49,9 @@ export const actions: Actions = {
 			notice: `Retired. Shoppers no longer see ${fabric.name}, ${fabric.colour}; orders already placed keep it.`
 		};
 	},
-	restore: async ({ params }) => {
+	restore: async (event) => {
+		requireRole(event, OWNER);
+		const { params } = event;
 		const fabric = await fabricFor(params.id);
 		if (!fabric.retiredAt) return fail(409, { notice: 'This fabric is in the shop already.' });
 		await db.update(fabrics).set({ retiredAt: null }).where(eq(fabrics.id, fabric.id));

@@ -8,6 +8,7 @@ import { styleSchema } from '$lib/forms/catalogue';
 import { idParam, styleFormData } from '../../catalogue.server';
 import { saveStyle } from '../../style-save.server';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
 async function styleFor(idText: string) {
 	const id = idParam(idText);
@@ -16,7 +17,9 @@ async function styleFor(idText: string) {
 	return row;
 }
 
-export const load: PageServerLoad = async ({ params, url }) => {
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, OWNER);
+	const { params, url } = event;
 	const style = await styleFor(params.id);
 	return {
 		form: await superValidate(styleFormData(style), zod4(styleSchema), { errors: false }),
@@ -26,14 +29,21 @@ export const load: PageServerLoad = async ({ params, url }) => {
 };
 
 export const actions: Actions = {
-	save: async (event) => saveStyle(event, await styleFor(event.params.id)),
-	retire: async ({ params }) => {
+	save: async (event) => {
+		requireRole(event, OWNER);
+		return saveStyle(event, await styleFor(event.params.id));
+	},
+	retire: async (event) => {
+		requireRole(event, OWNER);
+		const { params } = event;
 		const style = await styleFor(params.id);
 		if (style.retiredAt) return fail(409, { notice: 'This style is retired already.' });
 		await db.update(styles).set({ retiredAt: new Date() }).where(eq(styles.id, style.id));
 		return { notice: `Retired. ${style.name} is no longer in the shop; orders already placed keep it.` };
 	},
-	restore: async ({ params }) => {
+	restore: async (event) => {
+		requireRole(event, OWNER);
+		const { params } = event;
 		const style = await styleFor(params.id);
 		if (!style.retiredAt) return fail(409, { notice: 'This style is in the shop already.' });
 		await db.update(styles).set({ retiredAt: null }).where(eq(styles.id, style.id));

@@ -6,6 +6,7 @@ import { db } from '$lib/server/db';
 import { sessions, users, verificationTokens } from '$lib/server/db/schema';
 import { roleSchema, ROLE_CHOICES } from '$lib/forms/staff';
 import type { Actions, PageServerLoad } from './$types';
+import { OWNER, requireRole } from '$lib/server/access';
 
 async function accountFor(id: string) {
 	const [row] = id.length <= 255 ? await db.select().from(users).where(eq(users.id, id)).limit(1) : [];
@@ -13,8 +14,9 @@ async function accountFor(id: string) {
 	return row;
 }
 
-export const load: PageServerLoad = async ({ params, locals }) => {
-	const u = await accountFor(params.id);
+export const load: PageServerLoad = async (event) => {
+	const me = requireRole(event, OWNER);
+	const u = await accountFor(event.params.id);
 	return {
 		account: {
 			id: u.id,
@@ -25,7 +27,7 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 			createdAt: u.createdAt,
 			hasPassword: Boolean(u.passwordHash)
 		},
-		self: u.id === locals.user!.id,
+		self: u.id === me.id,
 		form: await superValidate({ role: u.role, confirm: false }, zod4(roleSchema), { errors: false })
 	};
 };
@@ -35,10 +37,11 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 const SELF = 'This is your own account: another owner can change its role or switch it off.';
 
 export const actions: Actions = {
-	role: async ({ request, params, locals }) => {
-		const u = await accountFor(params.id);
-		const form = await superValidate(request, zod4(roleSchema));
-		if (u.id === locals.user!.id) return message(form, SELF, { status: 403 });
+	role: async (event) => {
+		const me = requireRole(event, OWNER);
+		const u = await accountFor(event.params.id);
+		const form = await superValidate(event.request, zod4(roleSchema));
+		if (u.id === me.id) return message(form, SELF, { status: 403 });
 		if (!form.valid) return fail(400, { form });
 		if (form.data.role === u.role) return setError(form, 'role', `${u.name ?? u.email} is a ${u.role} already.`);
 		await db.update(users).set({ role: form.data.role }).where(eq(users.id, u.id));
@@ -46,10 +49,11 @@ export const actions: Actions = {
 		const label = ROLE_CHOICES.find((c) => c.id === form.data.role)!.label.toLowerCase();
 		return message(form, `${u.name ?? u.email} is a ${label} now. It counts from their next click.`);
 	},
-	disable: async ({ request, params, locals }) => {
-		const u = await accountFor(params.id);
-		if (u.id === locals.user!.id) return kitFail(403, { problem: SELF });
-		const confirmed = (await request.formData()).get('confirm') === 'on';
+	disable: async (event) => {
+		const me = requireRole(event, OWNER);
+		const u = await accountFor(event.params.id);
+		if (u.id === me.id) return kitFail(403, { problem: SELF });
+		const confirmed = (await event.request.formData()).get('confirm') === 'on';
 		if (!confirmed)
 			return kitFail(400, { problem: 'Tick the box to confirm: switching an account off signs them out at once.' });
 		if (u.disabledAt) return kitFail(409, { problem: 'This account is switched off already.' });
@@ -62,9 +66,10 @@ export const actions: Actions = {
 			notice: `Switched off. ${u.name ?? u.email} is signed out and cannot sign in until you switch the account back on.`
 		};
 	},
-	enable: async ({ params, locals }) => {
-		const u = await accountFor(params.id);
-		if (u.id === locals.user!.id) return kitFail(403, { problem: SELF });
+	enable: async (event) => {
+		const me = requireRole(event, OWNER);
+		const u = await accountFor(event.params.id);
+		if (u.id === me.id) return kitFail(403, { problem: SELF });
 		if (!u.disabledAt) return kitFail(409, { problem: 'This account is switched on already.' });
 		await db.update(users).set({ disabledAt: null }).where(eq(users.id, u.id));
 		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
