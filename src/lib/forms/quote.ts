@@ -30,12 +30,6 @@ export function toCm(m: z.infer<typeof measurementsInput>, units: (typeof UNITS)
 	return out;
 }
 
-/** The range for a field in the shopper's units, for hints beside the inputs. */
-export function rangeFor(field: 'waist' | 'hip' | 'waistToHip', units: (typeof UNITS)[number]) {
-	const r = MEASUREMENT_LIMITS[field];
-	return units === 'in' ? { min: Math.ceil((r.min / 2.54) * 8) / 8, max: Math.floor((r.max / 2.54) * 8) / 8 } : r;
-}
-
 export const optionsSchema = z
 	.object({
 		waistband: z.enum(['band', 'facing']).default('band'),
