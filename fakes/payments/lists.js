@@ -20,8 +20,15 @@ export function listPage(newestFirst, params, { kind, url, filters }) {
 	}
 	let limit = 10;
 	if (params.limit !== undefined) {
-		if (typeof params.limit !== 'string' || !/^\d+$/.test(params.limit) || Number(params.limit) < 1 || Number(params.limit) > 100) {
-			throw new ApiError(400, 'parameter_invalid_integer', 'Invalid limit: must be an integer from 1 to 100.', { param: 'limit' });
+		if (
+			typeof params.limit !== 'string' ||
+			!/^\d+$/.test(params.limit) ||
+			Number(params.limit) < 1 ||
+			Number(params.limit) > 100
+		) {
+			throw new ApiError(400, 'parameter_invalid_integer', 'Invalid limit: must be an integer from 1 to 100.', {
+				param: 'limit'
+			});
 		}
 		limit = Number(params.limit);
 	}
