@@ -12,7 +12,24 @@ export type Hit = { allowed: boolean; hits: number; retryAfter: number };
  * requests cannot both slip under the limit, and the row is read back inside the same transaction
  * (still locked by the upsert) so each caller sees its own count.
  */
-export async function hit(db: Db, key: string, { limit, windowSeconds }: Limit): Promise<Hit> {
+export async function hit(db: Db, key: string, opts: Limit): Promise<Hit> {
+	// Concurrent first hits on a new key can deadlock inside InnoDB (both wait on the other's insert);
+	// the one MariaDB picks as victim counted nothing, so it simply counts again.
+	for (let attempt = 1; ; attempt++) {
+		try {
+			return await count(db, key, opts);
+		} catch (err) {
+			if (attempt >= 3 || !deadlock(err)) throw err;
+		}
+	}
+}
+
+function deadlock(err: unknown) {
+	for (let e = err as { code?: string; cause?: unknown } | undefined; e; e = e.cause as typeof e) if (e.code === 'ER_LOCK_DEADLOCK') return true;
+	return false;
+}
+
+async function count(db: Db, key: string, { limit, windowSeconds }: Limit): Promise<Hit> {
 	return db.transaction(async (tx) => {
 		// MariaDB applies ON DUPLICATE KEY UPDATE assignments left to right: `hits` is decided while
 		// window_start still holds the old value, then window_start moves on.
