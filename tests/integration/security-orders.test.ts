@@ -5,8 +5,7 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { fabrics, measurementProfiles, orderEvents, orders, users } from '../../src/lib/server/db/schema';
 import { startAppInstance } from '../support/app';
 import { testDb } from '../support/db';
-import { testEnv } from '../support/env';
-import { actionMessage, ownerCookie, refundsOf, sessionsFor } from '../support/payments';
+import { actionMessage, ownerCookie, refundFormKey, refundsOf, sessionsFor } from '../support/payments';
 import { postForm, signInCookie } from '../support/session';
 import { Browser, GUEST_ADDRESS, addToBag, eventually, mailsTo, paidOrder } from '../support/shop';
 
@@ -86,8 +85,7 @@ describe('messages say what happened (finding 12)', () => {
 		const { number } = await paidOrder(await twillId(), unique('refund'));
 		const order = await eventually(async () => (await db.select().from(orders).where(and(eq(orders.number, number), eq(orders.status, 'paid'))))[0]);
 		const owner = await ownerCookie();
-		const page = await (await fetch(`${testEnv.appUrl}/admin/orders/${order.id}`, { headers: { cookie: owner } })).text();
-		const refundKey = page.match(/name="refundKey"[^>]*value="([^"]+)"/)?.[1] ?? page.match(/value="([^"]+)"[^>]*name="refundKey"/)?.[1] ?? '';
+		const refundKey = await refundFormKey(order.id, owner);
 		const fields = { amount: '10.00', reason: 'Hem shortened by the shopper', refundKey };
 		const answers = await Promise.all([1, 2, 3].map(() => postForm(`/admin/orders/${order.id}?/refund`, fields, owner)));
 		const messages = await Promise.all(answers.map(async (r) => actionMessage(await r.text()) ?? `status ${r.status}`));

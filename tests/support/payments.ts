@@ -50,3 +50,9 @@ export function actionMessage(html: string) {
 	const m = html.match(/data-testid="action-message"[^>]*>([^<]*)</);
 	return m ? m[1].replaceAll('&amp;', '&').replaceAll('&#39;', "'").replaceAll('&quot;', '"') : null;
 }
+
+/** The refund form's key as the owner's order page hands it out when it loads (a new one on each load). */
+export async function refundFormKey(orderId: number, cookie: string) {
+	const page = await (await fetch(`${testEnv.appUrl}/admin/orders/${orderId}`, { headers: { cookie } })).text();
+	return page.match(/name="refundKey"[^>]*value="([^"]+)"/)?.[1] ?? page.match(/value="([^"]+)"[^>]*name="refundKey"/)?.[1] ?? '';
+}
