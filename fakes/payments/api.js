@@ -133,6 +133,7 @@ export function createApi({ ledger, findEvent }) {
 		const [a, b, c, d] = seg;
 		if (a === 'checkout' && b === 'sessions') {
 			if (method === 'POST' && seg.length === 2) return x(ledger.createSession(params, apiVersion));
+			if (method === 'GET' && seg.length === 2) return ledger.listSessions(params);
 			if (method === 'GET' && seg.length === 3) return x(ledger.getSession(c));
 			if (method === 'GET' && seg.length === 4 && d === 'line_items') {
 				const data = ledger.lineItems(c);
@@ -151,6 +152,7 @@ export function createApi({ ledger, findEvent }) {
 			}
 		}
 		if (a === 'refunds' && seg.length === 1 && method === 'POST') return x(ledger.createRefund(params));
+		if (a === 'refunds' && seg.length === 1 && method === 'GET') return ledger.listRefunds(params);
 		throw new ApiError(
 			404,
 			'unrecognized_url',

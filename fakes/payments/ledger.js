@@ -6,6 +6,7 @@ import { ApiError, newId, noSuch, nowSeconds } from './errors.js';
 import { checkCard, MESSAGES } from './cards.js';
 import { readCheckoutParams } from './params.js';
 import { createRefund } from './refunds.js';
+import { listPage } from './lists.js';
 
 /** @typedef {Record<string, any>} Obj */
 /**
@@ -139,6 +140,28 @@ export function createLedger({ publicUrl, emit }) {
 
 		/** @param {string} id */
 		getSession: (id) => copy(record(id).session),
+
+		/**
+		 * GET /v1/checkout/sessions: filters payment_intent, status, customer_details[email].
+		 * @param {Obj} params
+		 */
+		listSessions(params) {
+			const all = [...sessions.values()].reverse();
+			for (const rec of all) expireIfDue(rec);
+			return listPage(
+				all.map((r) => r.session),
+				params,
+				{
+					kind: 'checkout.session',
+					url: '/v1/checkout/sessions',
+					filters: {
+						payment_intent: (s, v) => s.payment_intent === v,
+						status: (s, v) => s.status === v,
+						customer_details: (s, v) => s.customer_details?.email === v?.email
+					}
+				}
+			);
+		},
 
 		/** @param {string} id */
 		lineItems: (id) => record(id).lineItems.map(copy),
@@ -304,6 +327,18 @@ export function createLedger({ publicUrl, emit }) {
 			const re = refunds.get(id);
 			if (!re) throw noSuch('refund', id);
 			return copy(re);
+		},
+
+		/**
+		 * GET /v1/refunds: filters charge, payment_intent.
+		 * @param {Obj} params
+		 */
+		listRefunds(params) {
+			return listPage([...refunds.values()].reverse(), params, {
+				kind: 'refund',
+				url: '/v1/refunds',
+				filters: { charge: (r, v) => r.charge === v, payment_intent: (r, v) => r.payment_intent === v }
+			});
 		},
 
 		/** @param {Obj} params */

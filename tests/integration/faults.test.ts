@@ -29,9 +29,10 @@ describe('webhooks delivered again and out of order', () => {
 		const email = `storm-${Date.now()}@example.com`;
 		const { body } = await apiOrder(testEnv.appUrl, email);
 		const sessionId = body.paymentUrl.match(/cs_[A-Za-z0-9_]+/)[0];
-		const completed = JSON.stringify({ id: `evt_storm_paid_${Date.now()}`, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', status: 'complete', payment_intent: `pi_storm_${Date.now()}` } } });
+		const completed = JSON.stringify({ id: `evt_storm_paid_${Date.now()}`, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', status: 'complete', amount_total: body.total, currency: body.currency.toLowerCase(), payment_intent: `pi_storm_${Date.now()}` } } });
 		const expired = JSON.stringify({ id: `evt_storm_exp_${Date.now()}`, object: 'event', type: 'checkout.session.expired', created: Math.floor(Date.now() / 1000), data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'unpaid', status: 'expired' } } });
-		// Five of each, the expiry first and then interleaved: the order must end paid, once.
+		// Five of each, the expiry first and then interleaved: the order must end paid, once. The payment
+		// carries the order's amount and currency, as the provider's does (the webhook checks both).
 		const deliveries = [expired, completed, expired, completed, completed, expired, completed, expired, completed, expired];
 		const send = (payload: string) =>
 			fetch(`${testEnv.appUrl}/api/webhooks/stripe`, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': stripe.webhooks.generateTestHeaderString({ payload, secret: testEnv.webhookSecret }) }, body: payload });

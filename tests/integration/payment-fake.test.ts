@@ -358,4 +358,30 @@ describe('payment fake: webhook delivery', () => {
 		expect(none).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
 		expect(none.code).toBe('charge_already_refunded');
 	});
+
+	it('lists sessions and refunds newest first, filtered and paged as the provider documents', async () => {
+		const a = await newSession();
+		const b = await newSession();
+		await stripe.checkout.sessions.expire(a.id);
+		const open = await stripe.checkout.sessions.list({ status: 'open', limit: 100 });
+		expect(open.data.map((s) => s.id)).toContain(b.id);
+		expect(open.data.map((s) => s.id)).not.toContain(a.id);
+		const newest = await stripe.checkout.sessions.list({ limit: 1 });
+		expect([newest.data[0].id, newest.has_more]).toEqual([b.id, true]);
+		const next = await stripe.checkout.sessions.list({ limit: 1, starting_after: b.id });
+		expect(next.data[0].id).toBe(a.id);
+
+		await payViaControl(b.id, SUCCESS);
+		const pi = String((await stripe.checkout.sessions.retrieve(b.id)).payment_intent);
+		expect((await stripe.checkout.sessions.list({ payment_intent: pi })).data.map((s) => s.id)).toEqual([b.id]);
+		const first = await stripe.refunds.create({ payment_intent: pi, amount: 100 });
+		const second = await stripe.refunds.create({ payment_intent: pi, amount: 200 });
+		const refunds = await stripe.refunds.list({ payment_intent: pi });
+		expect(refunds.data.map((r) => [r.id, r.amount])).toEqual([
+			[second.id, 200],
+			[first.id, 100]
+		]);
+		const bad = await stripe.refunds.list({ limit: 101 }).catch((e) => e);
+		expect([bad.statusCode, bad.param]).toEqual([400, 'limit']);
+	});
 });

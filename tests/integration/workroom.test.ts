@@ -4,6 +4,7 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { fabrics, orderEvents, orderLines, orders } from '../../src/lib/server/db/schema';
 import { testDb } from '../support/db';
 import { testEnv } from '../support/env';
+import { actionMessage, refundFormKey } from '../support/payments';
 import { postForm, signInCookie } from '../support/session';
 import { eventually, mailsTo, paidOrder } from '../support/shop';
 
@@ -118,9 +119,12 @@ describe('refunds through the payment fake', () => {
 	it('refunds part, then the rest, and the order follows the provider’s events', async () => {
 		const fabric = await twill();
 		const { number } = await paidOrder(fabric.id);
-		const o = await orderId(number);
-		const refund = (amount: string) => postForm(`/admin/orders/${o.id}?/refund`, { amount, reason: 'test' }, cookie.owner);
-		expect((await refund('10.00')).status).toBe(200);
+		// The refund form shows once the provider's payment event has marked the order paid.
+		const o = await eventually(async () => ((await orderId(number)).status === 'paid' ? orderId(number) : null));
+		// Each refund from the page as it loads, with the form's own key.
+		const refund = async (amount: string) => postForm(`/admin/orders/${o.id}?/refund`, { amount, reason: 'test', refundKey: await refundFormKey(o.id, cookie.owner) }, cookie.owner);
+		const first = await refund('10.00');
+		expect(actionMessage(await first.text())).toMatch(/^Refund of €10\.00 sent to the payment service/);
 		const partial = await eventually(async () => ((await orderId(number)).refundedTotal === 1000 ? orderId(number) : null));
 		expect(partial.status).toBe('paid');
 		const tooMuch = await refund(String(o.total));
@@ -135,7 +139,7 @@ describe('refunds through the payment fake', () => {
 describe('refunds on the demo atelier’s past orders', () => {
 	it('refunds a seeded delivered order through the payment fake, which learned of it at start', async () => {
 		const o = await orderId('QL-1002');
-		const res = await postForm(`/admin/orders/${o.id}?/refund`, { amount: '12.50', reason: 'hem let down by hand' }, cookie.owner);
+		const res = await postForm(`/admin/orders/${o.id}?/refund`, { amount: '12.50', reason: 'hem let down by hand', refundKey: await refundFormKey(o.id, cookie.owner) }, cookie.owner);
 		expect(res.status).toBe(200);
 		const after = await eventually(async () => ((await orderId('QL-1002')).refundedTotal === o.refundedTotal + 1250 ? orderId('QL-1002') : null));
 		expect(after.status).toBe('delivered'); // a partial refund leaves the stage alone

@@ -38,3 +38,15 @@ export const checkoutSchema = z.object({
 	measurementConsent: z.boolean().default(false).refine(Boolean, 'We need your agreement to draft from your measurements.'),
 	madeToMeasure: z.boolean().default(false).refine(Boolean, 'Please confirm you have read how returns work for made-to-measure skirts.')
 });
+
+/**
+ * The checkout page's form: the shopper's details plus the key the page made when it loaded, so the
+ * same form sent twice (double click, a retry after a lost answer) finds the order the first one placed.
+ * Optional: without it an order is placed each time, as through the API.
+ */
+export const checkoutFormSchema = checkoutSchema.extend({
+	checkoutKey: z
+		.string()
+		.regex(/^[A-Za-z0-9-]{16,64}$/, 'This checkout page is out of date: reload it and send the form again.')
+		.optional()
+});

@@ -26,9 +26,11 @@ export const actions: Actions = {
 	deleteCard: async (event) => {
 		const user = requireRole(event, SIGNED_IN);
 		const id = Number((await event.request.formData()).get('id'));
-		if (!Number.isInteger(id)) return fail(400, { message: 'No such card.' });
-		// Only her own card: the user id is part of the condition.
-		await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		const none = 'We found no measure card of yours with that number, so nothing was deleted.';
+		if (!Number.isSafeInteger(id) || id <= 0) return fail(404, { message: none });
+		// Only her own card: the user id is part of the condition, and the count says whether there was one.
+		const [{ affectedRows }] = await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		if (affectedRows === 0) return fail(404, { message: none });
 		return { message: 'Measure card deleted.' };
 	},
 	deleteMeasurements: async (event) => {

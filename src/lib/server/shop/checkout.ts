@@ -1,18 +1,32 @@
-import { and, eq } from 'drizzle-orm';
-import type Stripe from 'stripe';
+import { eq } from 'drizzle-orm';
+import Stripe from 'stripe';
 import type { Db } from '../db/client';
-import { fabrics, orderEvents, orderLines, orders, payments, type ShippingAddress } from '../db/schema';
+import { orderEvents, orderLines, orders, type ShippingAddress } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { orderReceivedMail } from '../mail/templates';
-import { orderToken } from '../orders/link';
 import { orderSummary } from '../orders/summary';
+import { openSession, type Opened } from '../payments/sessions';
 import type { BagItem } from '../../forms/quote';
 import { formatMetres } from '../../format';
 import { shippingCost } from '../../pricing';
 import { quoteSkirt, type QuoteProblem } from './quote';
 import { shopSettingsOf } from './rules';
 
-export type Shopper = { email: string; name: string; address: ShippingAddress; userId: string | null };
+export type Shopper = { email: string; name: string; address: ShippingAddress; userId: string | null; checkoutKey?: string | null };
+
+/** The order a checkout form with this key placed, if any. */
+export async function orderByCheckoutKey(db: Db, key: string) {
+	const [order] = await db.select().from(orders).where(eq(orders.checkoutKey, key));
+	return order ?? null;
+}
+
+/** MariaDB's duplicate-key error (1062), whether drizzle hands it over bare or wrapped. */
+function duplicateKey(err: unknown, index: string) {
+	for (let e = err as { code?: string; message?: string; cause?: unknown } | undefined; e; e = e.cause as typeof e) {
+		if (e.code === 'ER_DUP_ENTRY') return String(e.message).includes(index);
+	}
+	return false;
+}
 
 /**
  * Turns the bag into an order awaiting payment. Every price is computed again here from the
@@ -20,7 +34,6 @@ export type Shopper = { email: string; name: string; address: ShippingAddress; u
  */
 export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 	if (items.length === 0) return { ok: false as const, problem: { status: 400, message: 'Your bag is empty.' } satisfies QuoteProblem };
-	type Quoted = Extract<Awaited<ReturnType<typeof quoteSkirt>>, { ok: true }> & { item: BagItem };
 	const quoted: Quoted[] = [];
 	for (const item of items) {
 		const q = await quoteSkirt(db, { measurements: item.measurements, style: item.style, options: item.options, fabricId: item.fabricId, units: item.units }, { drawing: false });
@@ -41,7 +54,24 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 	const shipping = shippingCost(subtotal, settings.shipping);
 	const promisedDate = quoted.map((q) => q.quote.shipBy).sort().at(-1)!;
 
-	const { order, mailId } = await db.transaction(async (tx) => {
+	let created;
+	try {
+		created = await insertOrder(db, quoted, shopper, { subtotal, shipping, promisedDate, currency: settings.currency });
+	} catch (err) {
+		// The same form sent twice at once: the second insert waited for the first on the unique key and
+		// lost. Hers is the order the first one placed (its mail has gone once, from the first).
+		const earlier = shopper.checkoutKey && duplicateKey(err, 'checkout_key') ? await orderByCheckoutKey(db, shopper.checkoutKey) : null;
+		if (!earlier) throw err;
+		return { ok: true as const, order: earlier, mailIds: [] as number[], again: true };
+	}
+	return { ok: true as const, order: created.order, mailIds: [created.mailId], again: false };
+}
+
+type Quoted = Extract<Awaited<ReturnType<typeof quoteSkirt>>, { ok: true }> & { item: BagItem };
+
+async function insertOrder(db: Db, quoted: Quoted[], shopper: Shopper, money: { subtotal: number; shipping: number; promisedDate: string; currency: string }) {
+	const { subtotal, shipping, promisedDate } = money;
+	return db.transaction(async (tx) => {
 		const [{ id }] = await tx
 			.insert(orders)
 			.values({
@@ -50,12 +80,13 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 				email: shopper.email,
 				shopperName: shopper.name,
 				status: 'awaiting_payment',
-				currency: settings.currency,
+				currency: money.currency,
 				subtotal,
 				shipping,
 				total: subtotal + shipping,
 				promisedDate,
 				shippingAddress: shopper.address,
+				checkoutKey: shopper.checkoutKey ?? null,
 				houseRulesId: quoted[0].rulesId
 			})
 			.$returningId();
@@ -82,45 +113,22 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 		const mailId = await enqueueMail(tx, { to: shopper.email, orderId: id, ...orderReceivedMail(await orderSummary(tx, row)) });
 		return { order: row, mailId };
 	});
-	return { ok: true as const, order, mailIds: [mailId] };
 }
 
 /**
- * Opens a payment page for an order awaiting payment. Older open sessions are expired first, so a
- * shopper who retries can never pay twice.
+ * The payment page for an order awaiting payment: its open one, or a new one (see openSession). The
+ * order row is locked for the whole exchange with the provider, so concurrent retries take turns.
  */
-export async function startPayment(db: Db, stripe: Stripe, orderId: number, origin: string) {
-	const [order] = await db.select().from(orders).where(eq(orders.id, orderId));
-	if (!order || order.status !== 'awaiting_payment') return { ok: false as const, message: 'This order is not awaiting payment.' };
-	const open = await db.select().from(payments).where(and(eq(payments.orderId, orderId), eq(payments.state, 'open')));
-	for (const p of open) {
-		await stripe.checkout.sessions.expire(p.checkoutSessionId).catch(() => null);
-		await db.update(payments).set({ state: 'expired' }).where(eq(payments.id, p.id));
-	}
-	const lines = await db
-		.select({ total: orderLines.lineTotal, fabric: fabrics.name, options: orderLines.options })
-		.from(orderLines)
-		.innerJoin(fabrics, eq(fabrics.id, orderLines.fabricId))
-		.where(eq(orderLines.orderId, orderId));
-	const back = `${origin}/orders/${encodeURIComponent(order.number)}?t=${orderToken(order.number)}`;
-	const currency = order.currency.toLowerCase();
-	let session: Stripe.Checkout.Session;
+export async function startPayment(db: Db, stripe: Stripe, orderId: number, origin: string): Promise<Opened | { ok: false; reason: 'not_awaiting' | 'away'; message: string }> {
 	try {
-		session = await stripe.checkout.sessions.create({
-			mode: 'payment',
-			client_reference_id: order.number,
-			customer_email: order.email,
-			metadata: { order_id: String(order.id), order_number: order.number },
-			success_url: `${back}&paid=1`,
-			cancel_url: back,
-			line_items: [
-				...lines.map((l) => ({ quantity: 1, price_data: { currency, unit_amount: l.total, product_data: { name: `Made-to-measure skirt in ${l.fabric}` } } })),
-				...(order.shipping > 0 ? [{ quantity: 1, price_data: { currency, unit_amount: order.shipping, product_data: { name: 'Shipping' } } }] : [])
-			]
+		return await db.transaction(async (tx) => {
+			const [order] = await tx.select().from(orders).where(eq(orders.id, orderId)).for('update');
+			if (!order || order.status !== 'awaiting_payment') return { ok: false as const, reason: 'not_awaiting' as const, message: 'This order is not awaiting payment.' };
+			return openSession(tx, stripe, order, origin);
 		});
-	} catch {
-		return { ok: false as const, message: 'We could not reach the payment service just now. Your order is saved and awaiting payment: please try again in a minute.' };
+	} catch (err) {
+		if (!(err instanceof Stripe.errors.StripeError)) throw err;
+		console.error(`[payments] could not open a payment page for order ${orderId}: ${err.message}`);
+		return { ok: false as const, reason: 'away' as const, message: 'We could not reach the payment service just now. Your order is saved and awaiting payment: please try again in a minute.' };
 	}
-	await db.insert(payments).values({ orderId, checkoutSessionId: session.id, amount: order.total, currency: order.currency, state: 'open' });
-	return { ok: true as const, url: session.url! };
 }

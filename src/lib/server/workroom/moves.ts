@@ -1,10 +1,13 @@
 import { eq, inArray, sql } from 'drizzle-orm';
+import Stripe from 'stripe';
 import type { Db } from '../db/client';
 import { fabrics, orderLines } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { shippedMail } from '../mail/templates';
 import { moveOrder, MoveRefused, type Actor } from '../orders/stage';
 import { orderSummary } from '../orders/summary';
+import { closeOpenSessions } from '../payments/sessions';
+import { stripe } from '../payments/stripe';
 import type { OrderStage } from '../../orders/stages';
 import { formatMetres } from '../../format';
 
@@ -22,7 +25,8 @@ export type StageRequest = {
 /**
  * A workroom or back-office move, with what each stage brings: cutting takes the cloth off stock
  * (fabric rows locked in the same transaction as the order), shipping needs a carrier and a
- * tracking number and queues the shipped e-mail, cancelling is for the owner only.
+ * tracking number and queues the shipped e-mail, cancelling is for the owner only and closes the
+ * order's open payment page at the provider (under the order's lock, so none opens meanwhile).
  */
 export async function workroomMove(db: Db, req: StageRequest) {
 	if (req.to === 'cancelled' && req.actor.role !== 'owner') return { ok: false as const, status: 403 as const, message: 'Only the owner can cancel an order.' };
@@ -36,6 +40,14 @@ export async function workroomMove(db: Db, req: StageRequest) {
 		note: req.note ?? (req.to === 'shipped' ? `Sent with ${req.carrier}, tracking ${req.tracking}` : null),
 		set: req.to === 'shipped' ? { carrier: req.carrier!.trim(), trackingNumber: req.tracking!.trim() } : undefined,
 		alongside: async (tx, order) => {
+			if (req.to === 'cancelled') {
+				try {
+					await closeOpenSessions(tx, stripe(), order.id);
+				} catch (err) {
+					if (!(err instanceof Stripe.errors.StripeError)) throw err;
+					throw new MoveRefused(409, 'We could not reach the payment service to close the payment page of this order, so it is not cancelled yet. Try again in a minute.');
+				}
+			}
 			if (req.to === 'cutting') {
 				const lines = await tx.select({ fabricId: orderLines.fabricId, cm: orderLines.fabricCm }).from(orderLines).where(eq(orderLines.orderId, order.id));
 				const need = new Map<number, number>();

@@ -23,7 +23,7 @@ export const actions: Actions = {
 		if (!order) error(404, NOT_FOUND);
 		const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, order.number));
 		const payment = await startPayment(db, stripe(), row.id, env.ORIGIN ?? url.origin);
-		if (!payment.ok) return fail(503, { payError: payment.message });
+		if (!payment.ok) return fail(payment.reason === 'away' ? 503 : 409, { payError: payment.message });
 		redirect(303, payment.url);
 	}
 };

@@ -13,12 +13,14 @@ export const load: PageServerLoad = async (event) => {
 	requireRole(event, OWNER);
 	const found = await orderForOwner(db, Number(event.params.id));
 	if (!found) error(404, 'No such order.');
-	return found;
+	// The refund form's own key, made as the page loads: the same form sent twice is one refund.
+	return { ...found, refundKey: crypto.randomUUID() };
 };
 
 const refundSchema = z.object({
 	amount: z.coerce.number({ error: 'Enter the amount in euros.' }).positive('Enter the amount in euros.').max(100_000),
-	reason: z.string().trim().max(200).default('')
+	reason: z.string().trim().max(200).default(''),
+	refundKey: z.string({ error: 'This refund form is out of date: reload the page and send it again.' }).regex(/^[A-Za-z0-9-]{16,64}$/, 'This refund form is out of date: reload the page and send it again.')
 });
 
 export const actions: Actions = {
@@ -36,9 +38,9 @@ export const actions: Actions = {
 		const { params } = event;
 		const parsed = refundSchema.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
-		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: user.id, label: user.name }, parsed.data.reason);
+		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: user.id, label: user.name }, parsed.data.reason, parsed.data.refundKey);
 		if (!r.ok) return fail(400, { message: r.message });
-		return { message: 'Refund sent to the payment service; the order updates when it confirms.' };
+		return { message: r.message };
 	},
 	move: (event) => moveFromForm(event, OWNER)
 };

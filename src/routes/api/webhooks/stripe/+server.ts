@@ -17,7 +17,15 @@ export const POST: RequestHandler = async ({ request }) => {
 	} catch {
 		return json({ message: 'Signature check failed.' }, { status: 400 });
 	}
-	const { duplicate, mailIds } = await applyEvent(db, event);
+	let applied;
+	try {
+		applied = await applyEvent(db, stripe(), event);
+	} catch (err) {
+		// Nothing of it was recorded (one transaction): a non-2xx answer makes the provider send it again.
+		console.error(`[payments] event ${event.id} (${event.type}) not applied: ${(err as Error).message}`);
+		return json({ message: 'The event could not be applied just now; send it again.' }, { status: 503 });
+	}
+	const { duplicate, mailIds } = applied;
 	// The event is applied and its mail is in the outbox: answer now and send the mail after. Holding
 	// the answer for an SMTP round trip (at least the mail server's greeting delay) caps how fast
 	// events are taken when they come one at a time, as the payment fake sends them. A failed send
