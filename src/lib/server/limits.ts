@@ -43,6 +43,11 @@ export async function isOver(db: Db, key: string, { limit, windowSeconds }: Limi
 	return (rows[0]?.hits ?? 0) >= limit;
 }
 
+/** Takes one hit back (e.g. a sign-in that turned out right was not a guess). */
+export async function forgive(db: Db, key: string) {
+	await db.execute(sql`UPDATE rate_counter SET hits = GREATEST(hits - 1, 0) WHERE \`key\` = ${await fitKey(key)}`);
+}
+
 /** Forgets a key's count (e.g. after a successful sign-in, or in tests). */
 export async function reset(db: Db, key: string) {
 	await db.execute(sql`DELETE FROM rate_counter WHERE \`key\` = ${await fitKey(key)}`);
