@@ -1,0 +1,37 @@
+import { env } from '$env/dynamic/private';
+
+// The shop's own address comes from the ORIGIN setting only. Request headers (Host, X-Forwarded-Host,
+// Forwarded) are chosen by whoever sends the request, so nothing that leaves the shop (links in mail,
+// redirects) is built from them. Outside local use the app does not start without ORIGIN (config-check).
+const LOCAL_DEFAULT = 'http://127.0.0.1:3000';
+
+export function siteOrigin(): string {
+	return new URL(env.ORIGIN || LOCAL_DEFAULT).origin;
+}
+
+/** An absolute link on the shop, for mail: only the path and query of `pathOrUrl` are kept. */
+export function siteUrl(pathOrUrl: string | URL): string {
+	const u = new URL(pathOrUrl, siteOrigin());
+	return new URL(u.pathname + u.search + u.hash, siteOrigin()).toString();
+}
+
+/**
+ * Where to send the browser after sign-in: a path on this shop, or `fallback`. The URL standard
+ * decides, as the browser will (it drops tabs and newlines, reads "\" as "/", "//host" as another
+ * site), so what we check is what the browser follows; the answer is the parsed, re-serialised path.
+ */
+export function safeNext(next: string | null | undefined, fallback = '/'): string {
+	if (!next) return fallback;
+	const origin = siteOrigin();
+	let u: URL;
+	try {
+		u = new URL(next, origin);
+	} catch {
+		return fallback;
+	}
+	if (u.origin !== origin) return fallback;
+	const path = u.pathname + u.search + u.hash;
+	// A re-serialised path that starts with "//" or "/\" would read as another host when sent back as
+	// a relative Location; "/." prefixes are harmless but never needed.
+	return path.startsWith('/') && !path.startsWith('//') && !path.startsWith('/\\') ? path : fallback;
+}
