@@ -32,21 +32,11 @@ export const init: ServerInit = () => {
 	process.exit(1);
 };
 
-export const handle = sequence(
-	unavailable,
-	securityHeaders,
-	canonicalHost,
-	throttleCredentials,
-	authHandle,
-	currentUser,
-	guard
-);
+export const handle = sequence(unavailable, securityHeaders, canonicalHost, throttleCredentials, authHandle, currentUser, guard);
 
 export const handleError: HandleServerError = (input) => {
 	const dbDown = handleUnavailableError(input);
 	if (dbDown) return dbDown;
 	if (input.status >= 500) console.error(input.error);
-	return {
-		message: input.status >= 500 ? 'Something went wrong on our side. Please try again in a moment.' : input.message
-	};
+	return { message: input.status >= 500 ? 'Something went wrong on our side. Please try again in a moment.' : input.message };
 };

@@ -21,18 +21,14 @@ export function signInLinkMail(url: string) {
 }
 
 export function registerAttemptMail(signInUrl: string) {
-	const intro =
-		'Someone, perhaps you, tried to make a new account at Atelier Ondine with this e-mail address. You have an account with us already, so nothing has changed.';
-	const next =
-		'To get in, sign in with your password, or ask for a sign-in link on the same page: it works without a password.';
+	const intro = 'Someone, perhaps you, tried to make a new account at Atelier Ondine with this e-mail address. You have an account with us already, so nothing has changed.';
+	const next = 'To get in, sign in with your password, or ask for a sign-in link on the same page: it works without a password.';
 	const safety = 'If it was not you, you can ignore this e-mail: your account and its password stay as they were.';
+	const subject = 'Someone tried to make an account with your address';
 	return {
-		subject: 'Someone tried to make an account with your address',
+		subject,
 		text: `${intro}\n\n${next}\n\n${signInUrl}\n\n${safety}\n`,
-		html: layout('Someone tried to make an account with your address', [intro, next, safety], {
-			href: signInUrl,
-			label: 'Sign in'
-		})
+		html: layout(subject, [intro, next, safety], { href: signInUrl, label: 'Sign in' })
 	};
 }
 
@@ -48,13 +44,7 @@ type OrderSummary = {
 const firstName = (name: string) => name.trim().split(/\s+/)[0] ?? name;
 
 function orderMail(subject: string, o: OrderSummary, lead: string, extra: string[] = []) {
-	const paragraphs = [
-		`Dear ${firstName(o.shopperName)},`,
-		lead,
-		...o.lines.map((l) => `• ${l}`),
-		`Total ${o.total}. We plan to ship by ${o.promisedDate}.`,
-		...extra
-	];
+	const paragraphs = [`Dear ${firstName(o.shopperName)},`, lead, ...o.lines.map((l) => `• ${l}`), `Total ${o.total}. We plan to ship by ${o.promisedDate}.`, ...extra];
 	return {
 		subject,
 		text: `${paragraphs.join('\n\n')}\n\nYour order: ${o.link}\n`,
@@ -63,36 +53,19 @@ function orderMail(subject: string, o: OrderSummary, lead: string, extra: string
 }
 
 export function orderReceivedMail(o: OrderSummary) {
-	return orderMail(
-		`Order ${o.number} received: awaiting payment`,
-		o,
-		`We have your order ${o.number}. It is awaiting payment: once the payment goes through we start drafting your pattern.`
-	);
+	return orderMail(`Order ${o.number} received: awaiting payment`, o, `We have your order ${o.number}. It is awaiting payment: once the payment goes through we start drafting your pattern.`);
 }
 
 export function paymentConfirmedMail(o: OrderSummary) {
-	return orderMail(
-		`Order ${o.number} is paid`,
-		o,
-		`Thank you: your payment for order ${o.number} went through. Your skirt joins the cutting queue now.`,
-		[
-			'Your skirt is made to your measurements, so the usual right to return it does not apply in many places. Our remake promise still does: if it does not fit as drafted, tell us within 30 days of delivery.'
-		]
-	);
+	return orderMail(`Order ${o.number} is paid`, o, `Thank you: your payment for order ${o.number} went through. Your skirt joins the cutting queue now.`, [
+		'Your skirt is made to your measurements, so the usual right to return it does not apply in many places. Our remake promise still does: if it does not fit as drafted, tell us within 30 days of delivery.'
+	]);
 }
 
 export function shippedMail(o: OrderSummary & { carrier: string; tracking: string }) {
-	return orderMail(
-		`Order ${o.number} has shipped`,
-		o,
-		`Your skirt is on its way with ${o.carrier}. Tracking number: ${o.tracking}.`
-	);
+	return orderMail(`Order ${o.number} has shipped`, o, `Your skirt is on its way with ${o.carrier}. Tracking number: ${o.tracking}.`);
 }
 
 export function refundMail(o: OrderSummary & { refunded: string }) {
-	return orderMail(
-		`Refund for order ${o.number}`,
-		o,
-		`We have refunded ${o.refunded} for order ${o.number}. Your bank may take a few days to show it.`
-	);
+	return orderMail(`Refund for order ${o.number}`, o, `We have refunded ${o.refunded} for order ${o.number}. Your bank may take a few days to show it.`);
 }
