@@ -2,8 +2,6 @@ import { json, type Handle } from '@sveltejs/kit';
 import { withSignInContext, type SignInContext } from '../auth/context';
 import { SIGN_IN_MESSAGES } from '../auth/messages';
 
-export const THROTTLED_MESSAGE = SIGN_IN_MESSAGES.throttled;
-
 /**
  * Gives the sign-in throttle the client address (adapter-node's getClientAddress: the socket's
  * address, or ADDRESS_HEADER/XFF_DEPTH when a proxy is declared in front). Auth.js's own credentials
