@@ -1,18 +1,22 @@
 import { env } from '$env/dynamic/private';
 
-// The shop's own address comes from the ORIGIN setting only. Request headers (Host, X-Forwarded-Host,
+// The shop's own address comes from the ORIGIN setting. Request headers (Host, X-Forwarded-Host,
 // Forwarded) are chosen by whoever sends the request, so nothing that leaves the shop (links in mail,
-// redirects) is built from them. Outside local use the app does not start without ORIGIN (config-check).
+// redirects) is built from them. Outside local use the app does not start without ORIGIN
+// (config-check.ts); in local use without it (vite dev), a loopback address of the request is kept.
 const LOCAL_DEFAULT = 'http://127.0.0.1:3000';
+const LOOPBACK = /^(localhost|127(\.\d{1,3}){3}|\[::1\])$/;
 
-export function siteOrigin(): string {
-	return new URL(env.ORIGIN || LOCAL_DEFAULT).origin;
+export function siteOrigin(requestOrigin?: string): string {
+	if (env.ORIGIN) return new URL(env.ORIGIN).origin;
+	if (requestOrigin && LOOPBACK.test(new URL(requestOrigin).hostname)) return new URL(requestOrigin).origin;
+	return LOCAL_DEFAULT;
 }
 
 /** An absolute link on the shop, for mail: only the path and query of `pathOrUrl` are kept. */
 export function siteUrl(pathOrUrl: string | URL): string {
 	const u = new URL(pathOrUrl, siteOrigin());
-	return new URL(u.pathname + u.search + u.hash, siteOrigin()).toString();
+	return new URL(u.pathname + u.search + u.hash, siteOrigin(u.origin)).toString();
 }
 
 /**
@@ -31,7 +35,6 @@ export function safeNext(next: string | null | undefined, fallback = '/'): strin
 	}
 	if (u.origin !== origin) return fallback;
 	const path = u.pathname + u.search + u.hash;
-	// A re-serialised path that starts with "//" or "/\" would read as another host when sent back as
-	// a relative Location; "/." prefixes are harmless but never needed.
-	return path.startsWith('/') && !path.startsWith('//') && !path.startsWith('/\\') ? path : fallback;
+	// "/.//evil.example" parses to the path "//evil.example", which a browser would read as a host.
+	return path.startsWith('/') && !path.startsWith('//') ? path : fallback;
 }
