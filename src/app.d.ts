@@ -17,6 +17,14 @@ declare global {
 declare module '@auth/core/types' {
 	interface Session {
 		user: { id: string; email: string; name?: string | null };
+		/** users.sessionVersion when this session began (-1 for cookies from before it was kept). */
+		sessionVersion: number;
+	}
+}
+
+declare module '@auth/core/jwt' {
+	interface JWT {
+		sessionVersion?: number;
 	}
 }
 

@@ -1,7 +1,10 @@
 import { sequence } from '@sveltejs/kit/hooks';
-import type { HandleServerError } from '@sveltejs/kit';
+import type { HandleServerError, ServerInit } from '@sveltejs/kit';
 import { building } from '$app/environment';
+import { env } from '$env/dynamic/private';
 import { authHandle } from '$lib/server/auth';
+import { configMessage, configProblems } from '$lib/server/config-check';
+import { canonicalHost } from '$lib/server/hooks/origin';
 import { guard } from '$lib/server/hooks/guard';
 import { securityHeaders } from '$lib/server/hooks/headers';
 import { throttleCredentials } from '$lib/server/hooks/throttle';
@@ -20,7 +23,16 @@ if (!building) {
 	});
 }
 
-export const handle = sequence(unavailable, securityHeaders, throttleCredentials, authHandle, currentUser, guard);
+// Outside local use, published example secrets stop the app before it serves anything.
+export const init: ServerInit = () => {
+	if (building) return;
+	const problems = configProblems(env);
+	if (problems.length === 0) return;
+	console.error(configMessage(env, problems));
+	process.exit(1);
+};
+
+export const handle = sequence(unavailable, securityHeaders, canonicalHost, throttleCredentials, authHandle, currentUser, guard);
 
 export const handleError: HandleServerError = (input) => {
 	const dbDown = handleUnavailableError(input);

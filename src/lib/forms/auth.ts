@@ -1,6 +1,19 @@
 import { z } from 'zod';
+import { checkEmail } from '$lib/email';
 
-export const email = z.string().trim().toLowerCase().max(255).email('Enter an e-mail address such as name@example.com.');
+// Every form that takes an address (sign-in, register, checkout, the order API, staff invites) uses
+// this one field, so every address is stored in the one normalised form of $lib/email.
+export const email = z
+	.string()
+	.max(320, 'Enter an e-mail address such as name@example.com.')
+	.overwrite((v) => {
+		const r = checkEmail(v);
+		return r.ok ? r.email : v.trim();
+	})
+	.superRefine((v, ctx) => {
+		const r = checkEmail(v);
+		if (!r.ok) ctx.addIssue({ code: 'custom', message: r.message });
+	});
 
 export const passwordSignInSchema = z.object({
 	email,
@@ -14,8 +27,3 @@ export const registerSchema = z.object({
 	email,
 	password: z.string().min(10, 'Use at least 10 characters.').max(200)
 });
-
-/** Only same-site paths are followed after sign-in, so a crafted link cannot send anyone elsewhere. */
-export function safeNext(next: string | null | undefined, fallback = '/') {
-	return next && next.startsWith('/') && !next.startsWith('//') && !next.startsWith('/\\') ? next : fallback;
-}

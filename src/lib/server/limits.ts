@@ -1,19 +1,22 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from './db/client';
-import { rateCounters } from './db/schema';
 
 export type Limit = { limit: number; windowSeconds: number };
 export type Hit = { allowed: boolean; hits: number; retryAfter: number };
 
 /**
- * Counts one hit against `key` in a fixed window kept in MariaDB (rate_counter), so every app server
- * counts alike. Written by hand rather than with a limiter package because it is one upsert on a table
- * we already have: the increment and the window reset happen in that one statement, so concurrent
- * requests cannot both slip under the limit, and the row is read back inside the same transaction
- * (still locked by the upsert) so each caller sees its own count.
+ * Counts one hit against `key` in a fixed window and says whether it is within the limit.
+ *
+ * Home-made rather than a package because it must count in MariaDB (every app server shares the
+ * count) and must be exact under concurrency: one INSERT … ON DUPLICATE KEY UPDATE changes the row
+ * under its own row lock, and the count it wrote comes back in the same statement through
+ * LAST_INSERT_ID(expr) (per connection), so no read can see another request's hit in between.
+ * Thirty concurrent hits against a limit of five allow exactly five.
+ *
+ * Keys are short, e.g. `signin:email:<address>`; longer keys are hashed to fit the column.
  */
 export async function hit(db: Db, key: string, opts: Limit): Promise<Hit> {
-	// Concurrent first hits on a new key can deadlock inside InnoDB (both wait on the other's insert);
+	// Concurrent first hits on a new key can deadlock inside InnoDB (each waits on the other's insert);
 	// the one MariaDB picks as victim counted nothing, so it simply counts again.
 	for (let attempt = 1; ; attempt++) {
 		try {
@@ -30,19 +33,45 @@ function deadlock(err: unknown) {
 }
 
 async function count(db: Db, key: string, { limit, windowSeconds }: Limit): Promise<Hit> {
-	return db.transaction(async (tx) => {
-		// MariaDB applies ON DUPLICATE KEY UPDATE assignments left to right: `hits` is decided while
-		// window_start still holds the old value, then window_start moves on.
-		await tx.execute(sql`
-			INSERT INTO ${rateCounters} (\`key\`, hits, window_start) VALUES (${key}, 1, NOW(3))
-			ON DUPLICATE KEY UPDATE
-				hits = IF(window_start < NOW(3) - INTERVAL ${windowSeconds} SECOND, 1, hits + 1),
-				window_start = IF(window_start < NOW(3) - INTERVAL ${windowSeconds} SECOND, NOW(3), window_start)`);
-		const [rows] = await tx.execute(sql`
-			SELECT hits, TIMESTAMPDIFF(MICROSECOND, NOW(3), window_start + INTERVAL ${windowSeconds} SECOND) AS left_us
-			FROM ${rateCounters} WHERE \`key\` = ${key}`);
-		const row = (rows as unknown as { hits: number; left_us: number | string }[])[0];
-		const hits = Number(row.hits);
-		return { allowed: hits <= limit, hits, retryAfter: Math.max(1, Math.ceil(Number(row.left_us) / 1e6)) };
-	});
+	const k = await fitKey(key);
+	const window = Math.max(1, Math.round(windowSeconds));
+	// Assignments in ON DUPLICATE KEY UPDATE run left to right and see earlier ones: window_start is set
+	// last, so both tests read the old window start.
+	const expired = sql`window_start <= NOW(3) - INTERVAL ${window} SECOND`;
+	const [result] = (await db.execute(sql`
+		INSERT INTO rate_counter (\`key\`, hits, window_start) VALUES (${k}, LAST_INSERT_ID(1), NOW(3))
+		ON DUPLICATE KEY UPDATE
+			hits = LAST_INSERT_ID(IF(${expired}, 1, hits + 1)),
+			window_start = IF(${expired}, NOW(3), window_start)`)) as unknown as [{ insertId: number }];
+	const hits = Number(result.insertId);
+	if (hits <= limit) return { allowed: true, hits, retryAfter: 0 };
+	const [rows] = (await db.execute(
+		sql`SELECT GREATEST(1, CEIL(${window} - TIMESTAMPDIFF(MICROSECOND, window_start, NOW(3)) / 1e6)) AS wait FROM rate_counter WHERE \`key\` = ${k}`
+	)) as unknown as [{ wait: number | string }[]];
+	return { allowed: false, hits, retryAfter: Number(rows[0]?.wait ?? window) };
+}
+
+/** Whether `key` is over its limit now, without counting a hit (to refuse before any work is done). */
+export async function isOver(db: Db, key: string, { limit, windowSeconds }: Limit): Promise<boolean> {
+	const k = await fitKey(key);
+	const [rows] = (await db.execute(
+		sql`SELECT hits FROM rate_counter WHERE \`key\` = ${k} AND window_start > NOW(3) - INTERVAL ${Math.max(1, Math.round(windowSeconds))} SECOND`
+	)) as unknown as [{ hits: number }[]];
+	return (rows[0]?.hits ?? 0) >= limit;
+}
+
+/** Takes one hit back (e.g. a sign-in that turned out right was not a guess). */
+export async function forgive(db: Db, key: string) {
+	await db.execute(sql`UPDATE rate_counter SET hits = GREATEST(hits - 1, 0) WHERE \`key\` = ${await fitKey(key)}`);
+}
+
+/** Forgets a key's count (e.g. after a successful sign-in, or in tests). */
+export async function reset(db: Db, key: string) {
+	await db.execute(sql`DELETE FROM rate_counter WHERE \`key\` = ${await fitKey(key)}`);
+}
+
+async function fitKey(key: string) {
+	if (key.length <= 191) return key;
+	const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(key));
+	return `${key.slice(0, 120)}#${Buffer.from(digest).toString('base64url')}`;
 }

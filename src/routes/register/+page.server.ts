@@ -1,12 +1,16 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { eq } from 'drizzle-orm';
-import { message, setError, superValidate } from 'sveltekit-superforms';
+import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { registerSchema, safeNext } from '$lib/forms/auth';
+import { registerSchema } from '$lib/forms/auth';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
 import { hashPassword } from '$lib/server/auth/password';
 import { signInWith } from '$lib/server/auth/actions';
+import { hit } from '$lib/server/limits';
+import { sendMail } from '$lib/server/mail';
+import { registerAttemptMail } from '$lib/server/mail/templates';
+import { safeNext, siteUrl } from '$lib/server/origin';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals }) => {
@@ -21,14 +25,19 @@ export const actions: Actions = {
 		const { name, email, password } = form.data;
 		const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, email)).limit(1);
 		if (existing) {
+			// The screen must not tell a stranger that this address has an account: its owner gets a mail
+			// instead (at most three an hour, so the form cannot be used to flood someone's inbox).
 			form.data.password = '';
-			return setError(form, 'email', 'An account with this e-mail exists already: sign in, or e-mail yourself a sign-in link.');
+			const allowed = await hit(db, `register-mail:${email}`, { limit: 3, windowSeconds: 3600 });
+			if (allowed.allowed) await sendMail({ to: email, ...registerAttemptMail(siteUrl('/signin')) });
+			return message(form, `We sent a message to ${email}. Open it to carry on.`);
 		}
 		// Every account made here is a shopper; staff accounts are made by the owner.
 		await db.insert(users).values({ name, email, passwordHash: await hashPassword(password), role: 'shopper' });
 		const next = safeNext(event.url.searchParams.get('next'), '/account');
 		const outcome = await signInWith(event, 'credentials', { email, password }, next);
-		if (!outcome.ok) return message(form, 'Your account is made, but signing in failed: please sign in.', { status: 500 });
+		if (!outcome.ok)
+			return message(form, 'Your account is made, but signing in failed: please sign in.', { status: 500 });
 		redirect(303, next);
 	}
 };

@@ -1,6 +1,6 @@
 import type { Handle } from '@sveltejs/kit';
 import { isPersonal } from '../access';
-import { servedOverHttps } from '../site';
+import { servedOverHttps } from '../origin';
 
 // The content-security policy comes from kit.csp in svelte.config.js; these are the rest.
 export const securityHeaders: Handle = async ({ event, resolve }) => {

@@ -1,17 +1,27 @@
 import { json, type Handle } from '@sveltejs/kit';
-import { db } from '../db';
-import { isThrottled, THROTTLE } from '../auth/password';
+import { withSignInContext, type SignInContext } from '../auth/context';
+import { SIGN_IN_MESSAGES } from '../auth/messages';
 
-export const THROTTLED_MESSAGE = `Too many attempts for this e-mail. Wait ${THROTTLE.windowMinutes} minutes, or use "E-mail me a sign-in link".`;
-
-// Auth.js's own credentials endpoint can be posted to directly; it gets the same throttle as our form.
+/**
+ * Gives the sign-in throttle the client address (adapter-node's getClientAddress: the socket's
+ * address, or ADDRESS_HEADER/XFF_DEPTH when a proxy is declared in front). Auth.js's own credentials
+ * endpoint answers a throttled try with a redirect to its error page; it gets a plain 429 instead, the
+ * same as our form, with the wait in Retry-After.
+ */
 export const throttleCredentials: Handle = async ({ event, resolve }) => {
-	if (event.request.method === 'POST' && event.url.pathname === '/auth/callback/credentials') {
-		const form = await event.request.clone().formData().catch(() => null);
-		const email = form?.get('email');
-		if (typeof email === 'string' && (await isThrottled(db, email))) {
-			return json({ message: THROTTLED_MESSAGE }, { status: 429 });
-		}
+	let client: string | null = null;
+	try {
+		client = event.getClientAddress();
+	} catch {
+		// A proxy is declared but did not send the header: count the try per e-mail only.
 	}
-	return resolve(event);
+	const context: SignInContext = { client };
+	const response = await withSignInContext(context, () => resolve(event));
+	if (context.refused && response.status >= 300 && response.status < 400) {
+		return json(
+			{ message: SIGN_IN_MESSAGES[context.refused] },
+			{ status: 429, headers: { 'retry-after': String(context.retryAfter ?? 60) } }
+		);
+	}
+	return response;
 };

@@ -20,6 +20,18 @@ export function signInLinkMail(url: string) {
 	};
 }
 
+export function registerAttemptMail(signInUrl: string) {
+	const intro = 'Someone, perhaps you, tried to make a new account at Atelier Ondine with this e-mail address. You have an account with us already, so nothing has changed.';
+	const next = 'To get in, sign in with your password, or ask for a sign-in link on the same page: it works without a password.';
+	const safety = 'If it was not you, you can ignore this e-mail: your account and its password stay as they were.';
+	const subject = 'Someone tried to make an account with your address';
+	return {
+		subject,
+		text: `${intro}\n\n${next}\n\n${signInUrl}\n\n${safety}\n`,
+		html: layout(subject, [intro, next, safety], { href: signInUrl, label: 'Sign in' })
+	};
+}
+
 type OrderSummary = {
 	number: string;
 	shopperName: string;

@@ -1,7 +1,7 @@
 import type { Cookies } from '@sveltejs/kit';
 import { z } from 'zod';
 import { bagItemSchema, type BagItem } from '../../forms/quote';
-import { servedOverHttps } from '../site';
+import { servedOverHttps } from '../origin';
 
 // The bag lives in the shopper's own browser as an httpOnly cookie: nothing is stored for her on the
 // server until she checks out, and the server prices every item again from the database then.

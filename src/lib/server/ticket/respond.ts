@@ -3,7 +3,7 @@
 import { DraftInputError } from '../../drafting';
 import type { Db } from '../db/client';
 import { shopSettingsOf } from '../shop/rules';
-import { siteOrigin } from '../site';
+import { siteOrigin } from '../origin';
 import { loadTickets } from './load';
 import { renderTickets } from './pdf';
 

@@ -34,7 +34,8 @@ export const load: PageServerLoad = async (event) => {
 			? db
 					.select(account)
 					.from(users)
-					.where(or(like(users.email, `%${escapeLike(q)}%`), like(users.name, `%${escapeLike(q)}%`)))
+					// Addresses are stored lower-cased and compared byte for byte (binary collation).
+					.where(or(like(users.email, `%${escapeLike(q.toLowerCase())}%`), like(users.name, `%${escapeLike(q)}%`)))
 					.orderBy(asc(users.email))
 					.limit(26)
 			: Promise.resolve(null)

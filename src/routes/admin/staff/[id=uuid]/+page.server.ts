@@ -5,6 +5,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { sessions, users, verificationTokens } from '$lib/server/db/schema';
 import { roleSchema, ROLE_CHOICES } from '$lib/forms/staff';
+import { endSessions } from '$lib/server/auth/sessions';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
@@ -58,8 +59,10 @@ export const actions: Actions = {
 			return kitFail(400, { problem: 'Tick the box to confirm: switching an account off signs them out at once.' });
 		if (u.disabledAt) return kitFail(409, { problem: 'This account is switched off already.' });
 		await db.update(users).set({ disabledAt: new Date() }).where(eq(users.id, u.id));
-		// Their session is checked against the database on every request, so they are out now; any
-		// sign-in link still in their inbox goes too.
+		// Their session is checked against the database on every request, so they are out now; raising
+		// the session version keeps their old cookies out even once the account is switched back on.
+		// Any sign-in link still in their inbox goes too.
+		await endSessions(db, u.id);
 		await db.delete(sessions).where(eq(sessions.userId, u.id));
 		if (u.email) await db.delete(verificationTokens).where(eq(verificationTokens.identifier, u.email));
 		return {
