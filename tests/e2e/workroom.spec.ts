@@ -53,7 +53,7 @@ test('the cutter prints a ticket and takes an order to shipped; the owner sees i
 	owner.on('dialog', (d) => d.accept());
 	await owner.getByLabel('Refund amount (€)').fill('15.00');
 	await owner.getByRole('button', { name: 'Refund' }).click();
-	await expect(owner.getByTestId('action-message')).toContainText('Refund sent');
+	await expect(owner.getByTestId('action-message')).toContainText('Refund of €15.00 sent');
 	await expect.poll(async () => {
 		await owner.reload();
 		return owner.getByText(/refunded €15\.00/).count();
