@@ -147,3 +147,39 @@ export function scaleBar(
 }
 
 const P = (x: number, y: number): Point => ({ x, y });
+
+/** The key to the pen roles, in a row from (x, y): a sample of each line and its name. Returns the marks
+ * and where the row ends. */
+export function legendMarks(x: number, y: number, u: number, measure: Measure): { marks: Mark[]; end: number } {
+	const at = (dx: number, dy: number) => P(dx * u, y + dy * u);
+	const line = (role: Role, ...pts: [number, number][]): Mark => ({
+		kind: 'path',
+		role,
+		parts: through(pts.map(([a, b]) => at(a, b)))
+	});
+	const samples: [string, (x: number) => Mark[]][] = [
+		['seam line', (x) => [line('seam', [x, 0], [x + 16, 0])]],
+		['cutting line', (x) => [line('cutting', [x, 0], [x + 16, 0])]],
+		['dart', (x) => [line('dart', [x, -3], [x + 8, 3], [x + 16, -3])]],
+		['construction line', (x) => [line('construction', [x, 0], [x + 16, 0])]],
+		['grain line', (x) => grainArrow(at(x, 0), at(x + 16, 0), 4 * u)],
+		['notch', (x) => [line('cutting', [x + 4, -4], [x + 4, 4]), line('notch', [x + 4, -4], [x + 4, 0.5])]]
+	];
+	const marks: Mark[] = [];
+	let cx = x / u;
+	for (const [label, sample] of samples) {
+		marks.push(...sample(cx));
+		cx += 20;
+		marks.push({
+			kind: 'text',
+			role: 'label',
+			at: at(cx, 2.5),
+			text: label,
+			size: 7 * u,
+			anchor: 'start',
+			baseline: 'alphabetic'
+		});
+		cx += measure(label, 7 * u) / u + 12;
+	}
+	return { marks, end: cx * u };
+}

@@ -3,7 +3,7 @@
 // rule. The largest scale at which every piece fits on one page wins; portrait before landscape, and
 // the waistband (a long strip) may lie along the page.
 import type { Piece } from '../../drafting';
-import { DIM_ROOM, type PieceMap } from './draw';
+import { DIM_ROOM, type PlaceMap } from '../../drafting/drawing/piece';
 import { ptPerCm } from './text';
 
 export interface Area {
@@ -12,6 +12,20 @@ export interface Area {
 	w: number;
 	h: number;
 }
+
+/** Piece centimetres to page points: scaled, and for a long strip turned a quarter turn anticlockwise. */
+export interface PieceMap {
+	k: number;
+	turned: boolean;
+	ox: number;
+	oy: number;
+}
+
+/** The same place in cm of a drawing that the page shows at k points a cm from its corner. */
+export const placeOf =
+	(m: PieceMap): PlaceMap =>
+	(p) =>
+		m.turned ? { x: m.ox / m.k + p.y, y: m.oy / m.k - p.x } : { x: m.ox / m.k + p.x, y: m.oy / m.k + p.y };
 
 /** A piece with its place on a page. */
 export interface Placed {

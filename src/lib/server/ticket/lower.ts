@@ -2,9 +2,12 @@
 // for cut, sewn and finished, the sharp-tools caution, and the footer every page carries.
 import { formatCm } from '../../drafting';
 import { formatMetres } from '../../format';
-import { drawMarker } from './marker';
+import { laneOf, markerMarks, needsLegend } from '../../drafting/drawing/marker';
+import type { Layout } from '../../drafting';
+import { drawMarks, pdfMeasure } from './draw-pdf';
+import type { Area } from './layout';
 import type { Frame } from './page-one';
-import { INK, PENCIL, THREAD, heading, line, para } from './text';
+import { INK, PENCIL, THREAD, heading, line, para, ptPerCm } from './text';
 import type { Ticket } from './ticket';
 
 type Doc = PDFKit.PDFDocument;
@@ -95,11 +98,28 @@ const paraHeight = (doc: Doc, text: string, width: number, size: number) => {
 	return doc.heightOfString(text, { width, lineGap: 1 }) + 2;
 };
 
-/** The lay drawing of a ticket's estimate in a box. */
-export function layDrawing(doc: Doc, t: Ticket, box: { x: number; y: number; w: number; h: number }) {
+// 1:25 sits between 1:20 and 1:50 on metric scale rules (common practice).
+const MARKER_SCALES = [10, 20, 25, 50, 100] as const;
+/** Room round the lay in its box for its words, grain arrow and scale bar, points. */
+const PAD = { left: 16, top: 6, bottom: 32, right: 38 };
+
+/** The scale (1:n) at which a lay fits a box. */
+export function markerScale(layout: Layout, box: Area): number {
+	const lane = laneOf(layout);
+	const room = { w: box.w - PAD.left - PAD.right, h: box.h - PAD.top - PAD.bottom - (needsLegend(layout) ? 10 : 0) };
+	const fits = (n: number) => layout.layLength * ptPerCm(n) <= room.w && (lane.max - lane.min) * ptPerCm(n) <= room.h;
+	return MARKER_SCALES.find(fits) ?? MARKER_SCALES[MARKER_SCALES.length - 1];
+}
+
+/** The lay drawing of a ticket's estimate in a box, pieces numbered as in the piece list. */
+export function layDrawing(doc: Doc, t: Ticket, box: Area) {
 	if (!t.estimate) return;
 	const number = new Map(t.draft.pieces.map((p, i) => [p.id, i + 1]));
-	drawMarker(doc, t.estimate.layout, box, (id) => number.get(id) ?? 0);
+	const layout = t.estimate.layout;
+	const scale = markerScale(layout, box);
+	const k = ptPerCm(scale);
+	const marks = markerMarks(layout, scale, 1 / k, pdfMeasure(doc), (id) => number.get(id) ?? 0);
+	drawMarks(doc, marks, { k, ox: box.x + PAD.left, oy: box.y + PAD.top });
 }
 
 /** Sign-off boxes for the three workroom stages, from `top`. */

@@ -4,15 +4,12 @@
 import PDFDocument from 'pdfkit';
 import { blockFigures, pieceList } from './figures';
 import type { Piece } from '../../drafting';
-import { DIM_ROOM, type PieceMap } from './draw';
-import { registerLora } from './fonts';
-import { GAP, planPieces, type Area, type Placed } from './layout';
-import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOff } from './lower';
-import { markerScale } from './marker';
+import { CAPTION_SPILL, DIM_ROOM, captionHeight, captionLines, labelsFit } from '../../drafting/drawing/piece';
+import { registerLora } from '../fonts/lora';
+import { GAP, placeOf, planPieces, type Area, type PieceMap, type Placed } from './layout';
+import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, markerScale, signOff } from './lower';
 import { banners, facts, header, type Frame } from './page-one';
-import { CAPTION_SPILL, captionHeight, captionLines } from './marks';
-import { planPiece } from './piece';
-import { piecesArea, piecesPage, radiusOf } from './pieces-page';
+import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
 import { MM, heading } from './text';
 import type { Ticket } from './ticket';
 
@@ -53,8 +50,9 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 		const key = `${p.id}:${m.k}:${m.turned}`;
 		if (!fit.has(key)) {
 			const w = (m.turned ? p.bounds.maxY - p.bounds.minY : p.bounds.maxX - p.bounds.minX) * m.k + DIM_ROOM;
-			const lines = captionLines(doc, p, n, w + 2 * CAPTION_SPILL).length;
-			fit.set(key, planPiece(doc, p, m, n, radiusOf(t, p)).clear ? 0 : captionHeight(lines));
+			const style = ticketStyle(doc, t, p, m, n);
+			const lines = captionLines(p, n, w + 2 * CAPTION_SPILL, style).length;
+			fit.set(key, labelsFit(p, placeOf(m), style) ? 0 : captionHeight(lines));
 		}
 		return fit.get(key)!;
 	};

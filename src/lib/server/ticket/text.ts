@@ -1,13 +1,10 @@
-// Palette, units and text drawing for the cutting ticket. Every single line of text goes through
+// Units and text drawing for the cutting ticket. Every single line of text goes through
 // `line`, which sets it on its baseline in Lora, run by run (see fonts.ts), shrunk or cut to fit.
-import { runsOf, useFont, type Weight } from './fonts';
+import { PALETTE } from '../../drafting/drawing/model';
+import { runsOf, useFont, type Weight } from '../fonts/lora';
 
-/** The product palette (DESIGN.md). */
-export const INK = '#1E2230';
-export const CHALK = '#35598A';
-export const THREAD = '#A8323E';
-export const PENCIL = '#6B6F7A';
-export const PAPER = '#F6F1E7';
+/** The one palette (the drawing model's), by the names page layout uses. */
+export const { ink: INK, chalk: CHALK, thread: THREAD, pencil: PENCIL, paper: PAPER } = PALETTE;
 
 /** PDF points in a millimetre: 72 points to the inch, 25.4 mm to the inch. */
 export const MM = 72 / 25.4;
