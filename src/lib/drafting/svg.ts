@@ -30,12 +30,8 @@ function pathD(parts: Curve[], closed?: boolean): string {
 	let d = '';
 	let at: Curve['to'] | null = null;
 	for (const s of parts) {
-		if (!at || Math.abs(at.x - s.from.x) > 1e-9 || Math.abs(at.y - s.from.y) > 1e-9)
-			d += `M${n(s.from.x)} ${n(s.from.y)}`;
-		d +=
-			s.c1 && s.c2
-				? `C${n(s.c1.x)} ${n(s.c1.y)} ${n(s.c2.x)} ${n(s.c2.y)} ${n(s.to.x)} ${n(s.to.y)}`
-				: `L${n(s.to.x)} ${n(s.to.y)}`;
+		if (!at || Math.abs(at.x - s.from.x) > 1e-9 || Math.abs(at.y - s.from.y) > 1e-9) d += `M${n(s.from.x)} ${n(s.from.y)}`;
+		d += s.c1 && s.c2 ? `C${n(s.c1.x)} ${n(s.c1.y)} ${n(s.c2.x)} ${n(s.c2.y)} ${n(s.to.x)} ${n(s.to.y)}` : `L${n(s.to.x)} ${n(s.to.y)}`;
 		at = s.to;
 	}
 	return closed ? `${d}Z` : d;
@@ -47,24 +43,16 @@ function svgOf(m: Mark): string {
 	// SVG drawings carry no references (url(#…)), so paper under words is not clipped to the seam line:
 	// the words are placed inside it, with the seam line drawn over the paper.
 	if (m.kind === 'patch')
-		return m.rects
-			.map(
-				(r) =>
-					`<rect x="${n(r.x0)}" y="${n(r.y0)}" width="${n(r.x1 - r.x0)}" height="${n(r.y1 - r.y0)}" fill="#FFFFFF"/>`
-			)
-			.join('');
+		return m.rects.map((r) => `<rect x="${n(r.x0)}" y="${n(r.y0)}" width="${n(r.x1 - r.x0)}" height="${n(r.y1 - r.y0)}" fill="#FFFFFF"/>`).join('');
 	const pen = PENS[m.role];
-	if (m.kind === 'dot')
-		return `<circle cx="${n(m.at.x)}" cy="${n(m.at.y)}" r="${n(m.r)}" fill="${PALETTE[pen.tone]}"/>`;
+	if (m.kind === 'dot') return `<circle cx="${n(m.at.x)}" cy="${n(m.at.y)}" r="${n(m.r)}" fill="${PALETTE[pen.tone]}"/>`;
 	if (m.kind === 'text') {
 		const rot = m.angle ? ` transform="rotate(${n(m.angle)} ${n(m.at.x)} ${n(m.at.y)})"` : '';
 		const style = `${m.weight === 600 ? ' font-weight="600"' : ''}${m.italic ? ' font-style="italic"' : ''}`;
 		const base = m.baseline === 'alphabetic' ? '' : ' dominant-baseline="middle"';
 		return `<text x="${n(m.at.x)}" y="${n(m.at.y)}" font-size="${n(m.size)}" text-anchor="${m.anchor ?? 'middle'}"${base} fill="${PALETTE[m.tone ?? 'ink']}"${style}${rot}>${esc(m.text)}</text>`;
 	}
-	const fill = m.fill
-		? `fill="${PALETTE[m.fill]}"${m.fillOpacity !== undefined ? ` fill-opacity="${m.fillOpacity}"` : ''}`
-		: 'fill="none"';
+	const fill = m.fill ? `fill="${PALETTE[m.fill]}"${m.fillOpacity !== undefined ? ` fill-opacity="${m.fillOpacity}"` : ''}` : 'fill="none"';
 	if (m.noStroke) return `<path d="${pathD(m.parts, m.closed)}" ${fill}/>`;
 	const dash = (m.dashed ?? pen.dashed) ? ` stroke-dasharray="${pen.dash.screen.map(n).join(' ')}"` : '';
 	return `<path d="${pathD(m.parts, m.closed)}" ${fill} stroke="${PALETTE[pen.tone]}" stroke-width="${n(pen.width.screen)}"${dash}/>`;

@@ -4,11 +4,11 @@
 // of paper (`u` cm each), so the same marker reads at 1:25 on a ticket or at full size.
 import type { Layout } from '../fabric';
 import { formatCm } from '../units';
-import { through, type Mark, type Measure } from './model';
+import { ptPerCm, through, type Mark, type Measure } from './model';
 import { arrowhead, scaleBar } from './symbols';
 
 /** The band across the lay the pieces take (a piece may reach past the fold's edge when laid whole). */
-export function laneOf(layout: Layout) {
+function laneOf(layout: Layout) {
 	let [min, max] = [0, layout.laneWidth];
 	for (const p of layout.pieces)
 		for (const q of p.outline) {
@@ -29,15 +29,24 @@ export function ruledBar(at: { x: number; y: number }, u: number): { mark: Mark;
 }
 
 /** Whether the marker carries the line that says what a dashed outline means. */
-export const needsLegend = (layout: Layout) => layout.folded && layout.pieces.some((p) => p.layers === 1);
+const needsLegend = (layout: Layout) => layout.folded && layout.pieces.some((p) => p.layers === 1);
 
-export function markerMarks(
-	layout: Layout,
-	scale: number,
-	u: number,
-	measure: Measure,
-	numberOf: (pieceId: string) => number
-): Mark[] {
+// 1:25 sits between 1:20 and 1:50 on metric scale rules (common practice).
+const MARKER_SCALES = [10, 20, 25, 50, 100] as const;
+/** Room (points) the marker's words, grain arrow and scale bar take round the lay itself: markerMarks
+ * draws the lay from (left, top) of a box. */
+export const MARKER_PAD = { left: 16, top: 6, bottom: 32, right: 38 };
+
+/** The scale (1:n) at which a lay and its words fit a box of w × h points. */
+export function markerScale(layout: Layout, w: number, h: number): number {
+	const lane = laneOf(layout);
+	const P = MARKER_PAD;
+	const room = { w: w - P.left - P.right, h: h - P.top - P.bottom - (needsLegend(layout) ? 10 : 0) };
+	const fits = (n: number) => layout.layLength * ptPerCm(n) <= room.w && (lane.max - lane.min) * ptPerCm(n) <= room.h;
+	return MARKER_SCALES.find(fits) ?? MARKER_SCALES[MARKER_SCALES.length - 1];
+}
+
+export function markerMarks(layout: Layout, scale: number, u: number, measure: Measure, numberOf: (pieceId: string) => number): Mark[] {
 	const lane = laneOf(layout);
 	const at = (p: { x: number; y: number }) => ({ x: p.y, y: p.x - lane.min });
 	const [L, H] = [layout.layLength, lane.max - lane.min];
@@ -111,23 +120,13 @@ export function markerMarks(
 		{ x: 0, y: gy },
 		{ x: 50 * u, y: gy }
 	];
-	marks.push(
-		{ kind: 'path', role: 'grain', parts: through([g1, g2]) },
-		arrowhead(g2, { x: 1, y: 0 }, 4 * u),
-		arrowhead(g1, { x: -1, y: 0 }, 4 * u)
-	);
-	marks.push(
-		word(g2.x + 4 * u, gy + 2.3 * u, 'grain', { anchor: 'start' }),
-		word(L / 2, H + 8 * u, `lay ${formatCm(L)}`)
-	);
+	marks.push({ kind: 'path', role: 'grain', parts: through([g1, g2]) }, arrowhead(g2, { x: 1, y: 0 }, 4 * u), arrowhead(g1, { x: -1, y: 0 }, 4 * u));
+	marks.push(word(g2.x + 4 * u, gy + 2.3 * u, 'grain', { anchor: 'start' }), word(L / 2, H + 8 * u, `lay ${formatCm(L)}`));
 	marks.push(word(-4 * u, H / 2, `${formatCm(H)}${layout.folded ? ' folded' : ''}`, { baseline: 'middle', angle: 90 }));
 	const sx = 92 * u;
 	const ratio = `Scale 1:${scale}`;
 	marks.push(word(sx, gy + 2.3 * u, ratio, { anchor: 'start', weight: 600 }));
 	marks.push(ruledBar({ x: sx + measure(ratio, small, 600) + 8 * u, y: gy - 1.6 * u }, u).mark);
-	if (needsLegend(layout))
-		marks.push(
-			word(0, gy + 16 * u, 'Dashed outline: a piece needed from one layer only.', { anchor: 'start', tone: 'pencil' })
-		);
+	if (needsLegend(layout)) marks.push(word(0, gy + 16 * u, 'Dashed outline: a piece needed from one layer only.', { anchor: 'start', tone: 'pencil' }));
 	return marks;
 }

@@ -5,18 +5,7 @@
 import type { Point } from '../geometry';
 
 /** What a mark is on the pattern: it chooses the pen (colour, width, dash) a back end draws it with. */
-export type Role =
-	| 'seam'
-	| 'cutting'
-	| 'construction'
-	| 'dart'
-	| 'grain'
-	| 'fold'
-	| 'notch'
-	| 'label'
-	| 'dimension'
-	| 'scale-bar'
-	| 'cloth';
+export type Role = 'seam' | 'cutting' | 'construction' | 'dart' | 'grain' | 'fold' | 'notch' | 'label' | 'dimension' | 'scale-bar' | 'cloth';
 
 /** The house colours by name. */
 export type Tone = 'ink' | 'thread' | 'pencil' | 'chalk' | 'paper' | 'white';
@@ -120,13 +109,15 @@ export interface Drawing {
 	marks: Mark[];
 }
 
+/** Points of paper (1/72 in, 25.4 mm to the inch) a centimetre of cloth takes at a scale 1:n. */
+export const ptPerCm = (n: number) => 72 / 2.54 / n;
+
 /** The width of a line of text at a letter size, in the units of the size; supplied by the back end. */
 export type Measure = (text: string, size: number, weight?: Weight) => number;
 
 /** Lora's average advance over the drawings' words, measured with pdfkit on @fontsource/lora 5 (0.463 em
  * regular, 0.471 semibold): for a back end that cannot measure, such as an SVG drawn before the browser. */
-export const estimateWidth: Measure = (text, size, weight = 400) =>
-	[...text].length * size * (weight === 600 ? 0.48 : 0.47);
+export const estimateWidth: Measure = (text, size, weight = 400) => [...text].length * size * (weight === 600 ? 0.48 : 0.47);
 
 /** A path through points. */
 export const through = (pts: Point[]): Curve[] => pts.slice(1).map((to, i) => ({ from: pts[i], to }));
@@ -141,8 +132,7 @@ export const rectPath = (x: number, y: number, w: number, h: number): Curve[] =>
 		{ x, y }
 	]);
 
-export const overlaps = (a: Rect, b: Rect, pad = 0) =>
-	a.x0 < b.x1 + pad && b.x0 < a.x1 + pad && a.y0 < b.y1 + pad && b.y0 < a.y1 + pad;
+export const overlaps = (a: Rect, b: Rect, pad = 0) => a.x0 < b.x1 + pad && b.x0 < a.x1 + pad && a.y0 < b.y1 + pad && b.y0 < a.y1 + pad;
 
 /** A segment's bounding rectangle, widened by `pad`. */
 export const segRect = (a: Point, b: Point, pad: number): Rect => ({

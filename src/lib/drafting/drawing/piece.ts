@@ -2,7 +2,7 @@
 // fold bracket, seam line, notches, words. The words are placed first (place.ts), then everything is
 // listed in drawing order: lines under paper patches under the words, so no line runs through a word.
 import { add, mul, pointAt, sub, unit, type Point, type Segment } from '../geometry';
-import { flatten } from '../outline';
+import { boundsOf, flatten } from '../outline';
 import { allowanceText, type Piece } from '../pieces';
 import { formatCm, formatLength, type Units } from '../units';
 import { overlaps, segRect, upright, type Curve, type Mark, type Rect, type Tone } from './model';
@@ -30,9 +30,9 @@ export interface PieceStyle extends Fit {
 /** Room kept left of and below each piece for its dimension lines, in points of paper. */
 export const DIM_ROOM = 13;
 /** A caption may reach this far (points) into the gap beside its box. */
-export const CAPTION_SPILL = 3;
+const CAPTION_SPILL = 3;
 /** Height (points) a caption of so many lines takes. */
-export const captionHeight = (lines: number) => 9 * lines + 2;
+const captionHeight = (lines: number) => 9 * lines + 2;
 
 const path = (segs: Curve[], role: 'seam' | 'cutting', fill?: Tone): Mark => ({
 	kind: 'path',
@@ -61,18 +61,10 @@ const mapSeg = (s: Segment, f: PlaceMap): Curve =>
 
 /** The stack's lines: name (numbered), cut, any figure, notes, allowances in the drawing's units. */
 function stackLines(p: Piece, s: PieceStyle): StackLine[] {
-	const extra =
-		s.radius === undefined
-			? []
-			: [{ text: `waist radius r = ${formatCm(s.radius)}`, size: 0, kind: 'figure' as const }];
+	const extra = s.radius === undefined ? [] : [{ text: `waist radius r = ${formatCm(s.radius)}`, size: 0, kind: 'figure' as const }];
 	const labels = [...p.labels.slice(0, 2), ...extra, ...p.labels.slice(2)];
 	return labels.map((l) => ({
-		text:
-			l.kind === 'name' && s.number !== undefined
-				? `${s.number} · ${l.text}`
-				: l.kind === 'allowances'
-					? allowanceText(p.allowances, s.units)
-					: l.text,
+		text: l.kind === 'name' && s.number !== undefined ? `${s.number} · ${l.text}` : l.kind === 'allowances' ? allowanceText(p.allowances, s.units) : l.text,
 		size: l.size,
 		weight: l.kind === 'name' ? 600 : 400,
 		kind: l.kind
@@ -80,18 +72,12 @@ function stackLines(p: Piece, s: PieceStyle): StackLine[] {
 }
 
 /** Name and cut written under a piece whose labels do not fit inside it, wrapped to `width` (points). */
-export function captionLines(
-	p: Piece,
-	number: number | undefined,
-	width: number,
-	fit: Fit
-): { text: string; weight: 400 | 600 }[] {
+function captionLines(p: Piece, number: number | undefined, width: number, fit: Fit): { text: string; weight: 400 | 600 }[] {
 	const wrap = (words: string, weight: 400 | 600) => {
 		const out: string[] = [];
 		for (const word of words.split(' ')) {
 			const last = out[out.length - 1];
-			if (last !== undefined && fit.measure(`${last} ${word}`, 7 * fit.u, weight) <= width * fit.u)
-				out[out.length - 1] = `${last} ${word}`;
+			if (last !== undefined && fit.measure(`${last} ${word}`, 7 * fit.u, weight) <= width * fit.u) out[out.length - 1] = `${last} ${word}`;
 			else out.push(word);
 		}
 		return out.map((t) => ({ text: t, weight }));
@@ -99,8 +85,12 @@ export function captionLines(
 	return [...wrap(number === undefined ? p.name : `${number} · ${p.name}`, 600), ...wrap(p.cutText, 400)];
 }
 
-/** Whether a piece's labels find a clear place inside it at this style (else it needs a caption). */
-export const labelsFit = (p: Piece, f: PlaceMap, s: PieceStyle) => pieceMarks(p, f, { ...s, caption: undefined }).clear;
+/** Room (points) a piece needs under its box of `width` points for a caption: none when its labels find a
+ * clear place inside it at this style. */
+export function captionRoom(p: Piece, f: PlaceMap, s: PieceStyle, width: number): number {
+	if (pieceMarks(p, f, { ...s, caption: undefined }).clear) return 0;
+	return captionHeight(captionLines(p, s.number, width + 2 * CAPTION_SPILL, s).length);
+}
 
 /** The marks of one piece through a place map; `clear` is false when its labels found no place inside it. */
 export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[]; clear: boolean } {
@@ -120,9 +110,7 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 			y1: Math.max(a.y, b.y, c.y) + u
 		}))
 	];
-	const soft = p.lines
-		.filter((l) => l.points.length >= 2)
-		.map((l) => segRect(f(l.points[0]), f(l.points[l.points.length - 1]), u));
+	const soft = p.lines.filter((l) => l.points.length >= 2).map((l) => segRect(f(l.points[0]), f(l.points[l.points.length - 1]), u));
 	const words: Mark[] = [];
 	const knock: Rect[] = [];
 	// The hip line's length above it, in the longest wording that fits between the seams.
@@ -166,8 +154,7 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 		const bracket = foldBracket(a, b, n, span, { off, head: 3 * u, word });
 		fold.push(...bracket.marks);
 		words.push(bracket.word);
-		if (bracket.word.kind === 'text')
-			knock.push(wordRect(bracket.word.at, measure('fold', word) + 2 * u, 8 * u, bracket.word.angle ?? 0));
+		if (bracket.word.kind === 'text') knock.push(wordRect(bracket.word.at, measure('fold', word) + 2 * u, 8 * u, bracket.word.angle ?? 0));
 		avoid.push(box(span));
 	}
 	// The label stack: clear of everything if it can be; else across construction lines; else along the
@@ -189,16 +176,7 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 			for (const l of st.lines) {
 				const mid = run + (l.size * 1.3) / 2;
 				run += l.size * 1.3;
-				words.push(
-					text(
-						add(st.centre, mul(down, mid)),
-						l.text,
-						l.size,
-						st.angle,
-						l.weight,
-						l.kind === 'note' || l.kind === 'allowances' ? 'pencil' : 'ink'
-					)
-				);
+				words.push(text(add(st.centre, mul(down, mid)), l.text, l.size, st.angle, l.weight, l.kind === 'note' || l.kind === 'allowances' ? 'pencil' : 'ink'));
 			}
 			if (clear)
 				knock.push({
@@ -240,18 +218,10 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 		const at = f(k.at);
 		const inward = sub(f(add(k.at, k.inward)), at);
 		marks.push(...notchTicks(at, inward, Math.max(k.depth, 4 * u), k.double, 1.3 * u));
-		if (s.notchLabels && k.label)
-			words.push(text(add(at, mul(unit(inward), k.depth + 1.1)), k.label, 0.65, 0, 400, 'pencil'));
+		if (s.notchLabels && k.label) words.push(text(add(at, mul(unit(inward), k.depth + 1.1)), k.label, 0.65, 0, 400, 'pencil'));
 	}
 	marks.push(...words);
-	if (s.figures)
-		marks.push(
-			...overallSize(
-				seam,
-				p.cutting.segments.map((g) => mapSeg(g, f)),
-				s
-			)
-		);
+	if (s.figures) marks.push(...overallSize(p, f, s));
 	return { marks: [{ kind: 'group', name: p.name, marks }], clear };
 }
 
@@ -279,52 +249,19 @@ function radiusMarks(p: Piece, f: PlaceMap, u: number): Mark[] {
 }
 
 /** A piece's overall size on its seam line: the height left of it, the width below it. */
-function overallSize(seam: Curve[], cutting: Curve[], s: PieceStyle): Mark[] {
-	const ext = extent(seam);
-	const cut = extent(cutting);
+function overallSize(p: Piece, f: PlaceMap, s: PieceStyle): Mark[] {
+	const [ext, cut] = [p.seam, p.cutting].map((path) => boundsOf(flatten(path.segments, 2).map(f)));
 	const { u, measure } = s;
 	const dx = cut.minX - DIM_ROOM * 0.55 * u;
 	const dy = cut.maxY + DIM_ROOM * 0.55 * u;
 	const size = 6.5 * u;
-	const marks = [
-		...dimension(
-			{ x: dx, y: ext.maxY },
-			{ x: dx, y: ext.minY },
-			formatLength(ext.maxY - ext.minY, s.units),
-			size,
-			measure
-		),
-		...dimension(
-			{ x: ext.minX, y: dy },
-			{ x: ext.maxX, y: dy },
-			formatLength(ext.maxX - ext.minX, s.units),
-			size,
-			measure
-		)
-	];
-	const ext1: Curve[] = [
+	const extension: Curve[] = [
 		...[ext.minX, ext.maxX].map((x) => ({ from: { x, y: cut.maxY + 1.5 * u }, to: { x, y: dy + 2.5 * u } })),
 		...[ext.minY, ext.maxY].map((y) => ({ from: { x: cut.minX - 1.5 * u, y }, to: { x: dx - 2.5 * u, y } }))
 	];
-	marks.push({ kind: 'path', role: 'dimension', parts: ext1 });
-	return marks;
-}
-
-function extent(parts: Curve[]) {
-	const b = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
-	for (const s of parts) {
-		const pts =
-			s.c1 && s.c2
-				? Array.from({ length: 13 }, (_, i) =>
-						pointAt({ kind: 'cubic', from: s.from, c1: s.c1!, c2: s.c2!, to: s.to, edge: 'side' }, i / 12)
-					)
-				: [s.from, s.to];
-		for (const q of pts) {
-			b.minX = Math.min(b.minX, q.x);
-			b.minY = Math.min(b.minY, q.y);
-			b.maxX = Math.max(b.maxX, q.x);
-			b.maxY = Math.max(b.maxY, q.y);
-		}
-	}
-	return b;
+	return [
+		...dimension({ x: dx, y: ext.maxY }, { x: dx, y: ext.minY }, formatLength(ext.maxY - ext.minY, s.units), size, measure),
+		...dimension({ x: ext.minX, y: dy }, { x: ext.maxX, y: dy }, formatLength(ext.maxX - ext.minX, s.units), size, measure),
+		{ kind: 'path', role: 'dimension', parts: extension }
+	];
 }

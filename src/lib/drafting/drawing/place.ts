@@ -139,10 +139,7 @@ export function placeStack(fit: Fit, stack: Stack, poly: Point[], tiers: Rect[][
 			let v = insideAt.get(i);
 			if (v === undefined) {
 				const r = moved(rect, offsets[i][0], offsets[i][1]);
-				insideAt.set(
-					i,
-					(v = rectInside(isInside, { x0: r.x0 - 3 * u, y0: r.y0 - 2 * u, x1: r.x1 + 3 * u, y1: r.y1 + 2 * u }))
-				);
+				insideAt.set(i, (v = rectInside(isInside, { x0: r.x0 - 3 * u, y0: r.y0 - 2 * u, x1: r.x1 + 3 * u, y1: r.y1 + 2 * u })));
 			}
 			return v;
 		};
@@ -163,9 +160,7 @@ export function placeStack(fit: Fit, stack: Stack, poly: Point[], tiers: Rect[][
 		else if (lines.length >= 2) {
 			// A narrow strip: name and cut on one line.
 			const [name, cut] = lines;
-			lines = [
-				{ text: `${name.text} · ${cut.text}`, size: Math.min(name.size, cut.size + 0.5 * u), weight: 600, kind: 'name' }
-			];
+			lines = [{ text: `${name.text} · ${cut.text}`, size: Math.min(name.size, cut.size + 0.5 * u), weight: 600, kind: 'name' }];
 		} else break;
 	}
 	return { stack, clear: false };

@@ -21,11 +21,7 @@ export function arrowhead(tip: Point, dir: Point, size: number, role: Role = 'gr
 /** The grain line: a long double-headed arrow. */
 export function grainArrow(from: Point, to: Point, head: number): Mark[] {
 	const d = sub(to, from);
-	return [
-		{ kind: 'path', role: 'grain', parts: through([from, to]) },
-		arrowhead(to, d, head),
-		arrowhead(from, mul(d, -1), head)
-	];
+	return [{ kind: 'path', role: 'grain', parts: through([from, to]) }, arrowhead(to, d, head), arrowhead(from, mul(d, -1), head)];
 }
 
 /** The fold bracket: parallel to the fold edge on the `inward` side, over the stretch `span` (fractions
@@ -96,8 +92,7 @@ export function dimension(a: Point, b: Point, label: string, size: number, measu
 			]
 		});
 	const tick = mul(add(d, normalOf(d)), size * 0.31);
-	for (const p of [a, b])
-		out.push({ kind: 'path', role: 'dimension', parts: [{ from: sub(p, tick), to: add(p, tick) }] });
+	for (const p of [a, b]) out.push({ kind: 'path', role: 'dimension', parts: [{ from: sub(p, tick), to: add(p, tick) }] });
 	out.push({
 		kind: 'text',
 		role: 'dimension',

@@ -33,15 +33,7 @@ const text = (at: Point, s: string, size: number, o: TextOpts = {}): Mark => ({
 });
 
 /** A title above, a scale bar below: 10 cm in 1 cm blocks, or 4 inches in half-inch blocks. */
-function frame(
-	marks: Mark[],
-	minX: number,
-	minY: number,
-	maxX: number,
-	maxY: number,
-	title: string,
-	units: Units
-): Drawing {
+function frame(marks: Mark[], minX: number, minY: number, maxX: number, maxY: number, title: string, units: Units): Drawing {
 	const x0 = minX - MARGIN;
 	const y0 = minY - MARGIN - 3;
 	const bar = P(x0 + MARGIN, maxY + MARGIN);
@@ -101,25 +93,11 @@ export function blockView(draft: Draft, units: Units, measure: Measure): Drawing
 	// The hip line's words slide along it clear of the side seam and the darts (they were struck through
 	// by the side seam when always centred).
 	const hipWords = `Hip line, half the body: ${fl(fig.back.hipWidth + fig.front.hipWidth)}`;
-	const sides = [
-		segRect(back.hipCurve.from, back.hipCurve.to, 0.3),
-		segRect(mirror(front.hipCurve.from), mirror(front.hipCurve.to), 0.3)
-	];
-	const darts = [
-		...back.darts,
-		...front.darts.map((g) => ({ ...g, top1: mirror(g.top1), point: mirror(g.point), top2: mirror(g.top2) }))
-	].map((g) => segRect(g.top1, g.point, 0.3));
-	const t =
-		freeAlong(
-			P(0, d),
-			P(W, d),
-			measure(hipWords, small),
-			small * 1.2,
-			P(0, -0.8),
-			[...sides, ...darts],
-			0.3,
-			[0.5, 0.68, 0.32, 0.75, 0.25]
-		) ?? 0.75;
+	const sides = [segRect(back.hipCurve.from, back.hipCurve.to, 0.3), segRect(mirror(front.hipCurve.from), mirror(front.hipCurve.to), 0.3)];
+	const darts = [...back.darts, ...front.darts.map((g) => ({ ...g, top1: mirror(g.top1), point: mirror(g.point), top2: mirror(g.top2) }))].map((g) =>
+		segRect(g.top1, g.point, 0.3)
+	);
+	const t = freeAlong(P(0, d), P(W, d), measure(hipWords, small), small * 1.2, P(0, -0.8), [...sides, ...darts], 0.3, [0.5, 0.68, 0.32, 0.75, 0.25]) ?? 0.75;
 	marks.push(text(P(W * t, d - 0.8), hipWords, small, pencil));
 	const mids = [bh / 2, bh + fh / 2];
 	const seams = [fig.check.waistSeam.back, fig.check.waistSeam.front];
@@ -135,26 +113,9 @@ export function blockView(draft: Draft, units: Units, measure: Measure): Drawing
 		const gx = i ? W - x : x;
 		marks.push(...grainArrow(P(gx, d + 3), P(gx, L - 3), 1.2));
 	});
-	marks.push(
-		text(
-			P(W / 2, -2.6),
-			`Waist line · back mark ${fl(fig.back.waistWidth)} · front mark ${fl(fig.front.waistWidth)}`,
-			small,
-			pencil
-		)
-	);
-	marks.push(
-		text(P(-1.3, L / 2), 'Centre back', small, { angle: -90 }),
-		text(P(W + 1.3, L / 2), 'Centre front', small, { angle: 90 })
-	);
-	marks.push(
-		text(
-			P(W / 2, L + 1.5),
-			`Length ${fl(L)} · waist to hip ${fl(d)}${fig.hipDepthAssumed ? ' (assumed)' : ''}`,
-			small,
-			pencil
-		)
-	);
+	marks.push(text(P(W / 2, -2.6), `Waist line · back mark ${fl(fig.back.waistWidth)} · front mark ${fl(fig.front.waistWidth)}`, small, pencil));
+	marks.push(text(P(-1.3, L / 2), 'Centre back', small, { angle: -90 }), text(P(W + 1.3, L / 2), 'Centre front', small, { angle: 90 }));
+	marks.push(text(P(W / 2, L + 1.5), `Length ${fl(L)} · waist to hip ${fl(d)}${fig.hipDepthAssumed ? ' (assumed)' : ''}`, small, pencil));
 	return frame(marks, -3, -4, W + 3, L + 2.5, 'Skirt block (no allowances)', units);
 }
 
@@ -180,18 +141,8 @@ export function piecesView(draft: Draft, units: Units, measure: Measure): Drawin
 		right = Math.max(right, x - gap);
 		rowH = Math.max(rowH, p.bounds.maxY - p.bounds.minY);
 	}
-	const names = [...new Set(draft.pieces.map((p) => (p.fabric === 'lining' ? 'lining' : 'skirt fabric')))].join(
-		' and '
-	);
-	return frame(
-		marks,
-		0,
-		0,
-		right,
-		y + rowH,
-		`Pattern pieces · cut from ${names} · seam line black, cutting line red`,
-		units
-	);
+	const names = [...new Set(draft.pieces.map((p) => (p.fabric === 'lining' ? 'lining' : 'skirt fabric')))].join(' and ');
+	return frame(marks, 0, 0, right, y + rowH, `Pattern pieces · cut from ${names} · seam line black, cutting line red`, units);
 }
 
 export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawing {
@@ -200,9 +151,7 @@ export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawin
 	const len = Math.max(lay.layLength, 1);
 	// Lay coordinates (x across, y along) turned a quarter: the length runs left to right, the fold below.
 	const f = (q: Point) => P(q.y, lane - q.x);
-	const marks: Mark[] = [
-		{ kind: 'path', role: 'cloth', parts: rectPath(0, 0, len, lane), closed: true, fill: 'white' }
-	];
+	const marks: Mark[] = [{ kind: 'path', role: 'cloth', parts: rectPath(0, 0, len, lane), closed: true, fill: 'white' }];
 	for (const pl of lay.pieces) {
 		const piece = draft.pieces.find((p) => p.id === pl.pieceId);
 		marks.push({ kind: 'path', role: 'cutting', parts: through(pl.outline.map(f)), closed: true, fill: 'white' });
@@ -210,10 +159,7 @@ export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawin
 		const c = P((b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
 		const size = Math.max(0.9, Math.min(2.2, (b.maxY - b.minY) / 7));
 		const gy = c.y + size * 1.6;
-		marks.push(
-			...grainArrow(P(c.x - (b.maxX - b.minX) * 0.3, gy), P(c.x + (b.maxX - b.minX) * 0.3, gy), 1),
-			text(c, pl.name, size, { weight: 600 })
-		);
+		marks.push(...grainArrow(P(c.x - (b.maxX - b.minX) * 0.3, gy), P(c.x + (b.maxX - b.minX) * 0.3, gy), 1), text(c, pl.name, size, { weight: 600 }));
 		const note = pl.layers === 1 && lay.folded ? 'one layer' : piece?.cut.onFold && lay.folded ? 'on the fold' : '';
 		if (note) marks.push(text(P(c.x, c.y - size * 1.2), note, size * 0.6, { tone: 'pencil', italic: true }));
 	}
@@ -227,9 +173,7 @@ export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawin
 	if (!lay.folded) marks.push(text(P(len / 2, lane + 1.2), 'selvedge', 0.9, edge));
 	const buy = `Buy ${formatLength(est.length, units)} of ${formatLength(lay.width, units)} wide fabric · lay ${formatLength(lay.layLength, units)}`;
 	marks.push(text(P(len / 2, lane + (lay.folded ? 5.6 : 3)), buy, 1.1, { weight: 600 }));
-	lay.notes.forEach((t, i) =>
-		marks.push(text(P(0, lane + 7.4 + i * 1.4), t, 0.85, { anchor: 'start', tone: 'pencil' }))
-	);
+	lay.notes.forEach((t, i) => marks.push(text(P(0, lane + 7.4 + i * 1.4), t, 0.85, { anchor: 'start', tone: 'pencil' })));
 	return frame(
 		marks,
 		0,

@@ -5,7 +5,7 @@ import { ruledBar } from '../../drafting/drawing/marker';
 import { pieceMarks, type PieceStyle } from '../../drafting/drawing/piece';
 import { legendMarks } from '../../drafting/drawing/symbols';
 import { drawMarks, pdfMeasure } from './draw-pdf';
-import { placeOf, type Area, type PieceMap, type Placed } from './layout';
+import { placeOf, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
 import type { Frame } from './page-one';
 import { MM, PENCIL, line, ptPerCm } from './text';
 import type { Ticket } from './ticket';

@@ -1,10 +1,11 @@
-// Where each piece goes on the pieces page, and at which scale. The scales are the reduction series of
-// technical drawing, 1:5, 1:10, 1:20 (ISO 5455 [from memory]), so a cutter can read them with a scale
-// rule. The largest scale at which every piece fits on one page wins; portrait before landscape, and
-// the waistband (a long strip) may lie along the page.
-import type { Piece } from '../../drafting';
-import { DIM_ROOM, type PlaceMap } from '../../drafting/drawing/piece';
-import { ptPerCm } from './text';
+// Pieces on sheets of paper: where each piece goes and at which scale, in points of paper. For a reduced
+// print the scales are the reduction series of technical drawing, 1:5, 1:10, 1:20 (ISO 5455 [from
+// memory]), so a cutter can read them with a scale rule; a full-size print passes [1]. The largest scale
+// at which every piece fits on one sheet wins; portrait before landscape, and the waistband (a long
+// strip) may lie along the sheet. Each piece keeps room left of and below it for its dimension lines.
+import type { Piece } from '../pieces';
+import { ptPerCm } from './model';
+import { DIM_ROOM, type PlaceMap } from './piece';
 
 export interface Area {
 	x: number;
@@ -58,9 +59,7 @@ function boxSize(p: Piece, k: number, turned: boolean, extra: number) {
 
 function mapFor(p: Piece, k: number, turned: boolean, x: number, y: number): PieceMap {
 	const b = p.bounds;
-	return turned
-		? { k, turned, ox: x + DIM_ROOM - b.minY * k, oy: y + b.maxX * k }
-		: { k, turned, ox: x + DIM_ROOM - b.minX * k, oy: y - b.minY * k };
+	return turned ? { k, turned, ox: x + DIM_ROOM - b.minY * k, oy: y + b.maxX * k } : { k, turned, ox: x + DIM_ROOM - b.minX * k, oy: y - b.minY * k };
 }
 
 interface Shelf {
@@ -114,12 +113,7 @@ function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: Extr
 }
 
 /** The plan for a set of pieces: `areaFor` gives the drawing area of a portrait or landscape page. */
-export function planPieces(
-	pieces: Piece[],
-	areaFor: (landscape: boolean) => Area,
-	ladder: readonly number[],
-	extra: ExtraRoom = () => 0
-): PiecesPlan {
+export function planPieces(pieces: Piece[], areaFor: (landscape: boolean) => Area, ladder: readonly number[], extra: ExtraRoom = () => 0): PiecesPlan {
 	let fallback: PiecesPlan | null = null;
 	for (const scale of ladder) {
 		const k = ptPerCm(scale);
