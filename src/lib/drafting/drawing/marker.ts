@@ -18,12 +18,10 @@ function laneOf(layout: Layout) {
 	return { min, max };
 }
 
-/** A round true length for a scale bar between about 15 and 45 mm on paper (`u` cm of the drawing a point). */
-export const barLength = (u: number) => [10, 20, 50, 100, 200].find((c) => c / u >= 40) ?? 200;
-
-/** A labelled scale bar of `barLength(u)` at `at`: five blocks, its ends written under it. */
+/** A labelled scale bar at `at`: five blocks over a round true length between about 15 and 45 mm on paper
+ * (`u` cm of the drawing a point), its ends written under it. */
 export function ruledBar(at: { x: number; y: number }, u: number): { mark: Mark; length: number } {
-	const length = barLength(u);
+	const length = [10, 20, 50, 100, 200].find((c) => c / u >= 40) ?? 200;
 	const ends = { left: '0', right: formatCm(length), size: 6.5 * u, below: 11 * u };
 	return { mark: scaleBar(at, length, 5, 3.2 * u, 'white', ends), length };
 }
@@ -92,11 +90,7 @@ export function markerMarks(layout: Layout, scale: number, u: number, measure: M
 			])
 		},
 		word(L + 3 * u, 0, layout.folded ? 'fold' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' }),
-		word(L + 3 * u, H, layout.folded ? 'selvedges' : 'selvedge', {
-			baseline: 'middle',
-			anchor: 'start',
-			tone: 'pencil'
-		})
+		word(L + 3 * u, H, layout.folded ? 'selvedges' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' })
 	];
 	for (const p of layout.pieces) {
 		if (!p.outline.length) continue;
@@ -108,10 +102,7 @@ export function markerMarks(layout: Layout, scale: number, u: number, measure: M
 			fill: 'white',
 			dashed: p.layers === 1 && layout.folded
 		});
-		const c = p.outline.reduce((a, q) => ({ x: a.x + q.x / p.outline.length, y: a.y + q.y / p.outline.length }), {
-			x: 0,
-			y: 0
-		});
+		const c = p.outline.reduce((a, q) => ({ x: a.x + q.x / p.outline.length, y: a.y + q.y / p.outline.length }), { x: 0, y: 0 });
 		marks.push(word(at(c).x, at(c).y, String(numberOf(p.pieceId)), { size: 7 * u, weight: 600, baseline: 'middle' }));
 	}
 	// Grain runs along the selvedge: a double-headed arrow under the lay, then the scale and its bar.

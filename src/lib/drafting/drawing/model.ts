@@ -11,14 +11,7 @@ export type Role = 'seam' | 'cutting' | 'construction' | 'dart' | 'grain' | 'fol
 export type Tone = 'ink' | 'thread' | 'pencil' | 'chalk' | 'paper' | 'white';
 
 /** The one palette (DESIGN.md): ink, thread red, pencil grey, chalk blue, paper. */
-export const PALETTE: Record<Tone, string> = {
-	ink: '#1E2230',
-	thread: '#A8323E',
-	pencil: '#6B6F7A',
-	chalk: '#35598A',
-	paper: '#F6F1E7',
-	white: '#FFFFFF'
-};
+export const PALETTE: Record<Tone, string> = { ink: '#1E2230', thread: '#A8323E', pencil: '#6B6F7A', chalk: '#35598A', paper: '#F6F1E7', white: '#FFFFFF' };
 
 /** Where a drawing is seen: on a screen (widths in cm of a 1:1 drawing that the page shrinks to fit) or
  * on paper (widths in points, whatever the scale, so a 1:10 drawing keeps printable lines). */
@@ -121,16 +114,6 @@ export const estimateWidth: Measure = (text, size, weight = 400) => [...text].le
 
 /** A path through points. */
 export const through = (pts: Point[]): Curve[] => pts.slice(1).map((to, i) => ({ from: pts[i], to }));
-
-/** A closed rectangle path. */
-export const rectPath = (x: number, y: number, w: number, h: number): Curve[] =>
-	through([
-		{ x, y },
-		{ x: x + w, y },
-		{ x: x + w, y: y + h },
-		{ x, y: y + h },
-		{ x, y }
-	]);
 
 export const overlaps = (a: Rect, b: Rect, pad = 0) => a.x0 < b.x1 + pad && b.x0 < a.x1 + pad && a.y0 < b.y1 + pad && b.y0 < a.y1 + pad;
 

@@ -178,13 +178,7 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 				run += l.size * 1.3;
 				words.push(text(add(st.centre, mul(down, mid)), l.text, l.size, st.angle, l.weight, l.kind === 'note' || l.kind === 'allowances' ? 'pencil' : 'ink'));
 			}
-			if (clear)
-				knock.push({
-					x0: st.rect.x0 - 1.5 * u,
-					y0: st.rect.y0 - 0.5 * u,
-					x1: st.rect.x1 + 1.5 * u,
-					y1: st.rect.y1 + 0.5 * u
-				});
+			if (clear) knock.push({ x0: st.rect.x0 - 1.5 * u, y0: st.rect.y0 - 0.5 * u, x1: st.rect.x1 + 1.5 * u, y1: st.rect.y1 + 0.5 * u });
 		} else {
 			const box = s.caption;
 			const lines = captionLines(p, s.number, box.w / u + 2 * CAPTION_SPILL, s);
@@ -203,12 +197,7 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 		)
 	];
 	for (const l of p.lines)
-		if (l.points.length >= 2)
-			marks.push({
-				kind: 'path',
-				role: 'construction',
-				parts: l.points.slice(1).map((q, i) => ({ from: f(l.points[i]), to: f(q) }))
-			});
+		if (l.points.length >= 2) marks.push({ kind: 'path', role: 'construction', parts: l.points.slice(1).map((q, i) => ({ from: f(l.points[i]), to: f(q) })) });
 	for (const [a, b, c] of darts) marks.push(...dartMarks(a, b, c, 0.8 * u));
 	marks.push(...grainArrow(g1, g2, 4.5 * u), ...fold);
 	if (s.radius !== undefined) marks.push(...radiusMarks(p, f, u));

@@ -82,10 +82,7 @@ export function stackRect(fit: Fit, lines: StackLine[], centre: Point, angle: nu
  * to run across a narrow piece turns to run along it. */
 export function layoutStack(fit: Fit, lines0: StackLine[], poly: Point[], centre: Point, angle: number): Stack {
 	const { u, measure, readable } = fit;
-	const lines = lines0.map((l) => ({
-		...l,
-		size: readable ? Math.min(MAX_PT[l.kind] * u, Math.max(MIN_PT[l.kind] * u, l.size)) : l.size
-	}));
+	const lines = lines0.map((l) => ({ ...l, size: readable ? Math.min(MAX_PT[l.kind] * u, Math.max(MIN_PT[l.kind] * u, l.size)) : l.size }));
 	const min = (l: StackLine) => (readable ? MIN_PT[l.kind] * u : 0);
 	const xs = poly.map((q) => q.x);
 	const ys = poly.map((q) => q.y);
@@ -109,12 +106,7 @@ export function layoutStack(fit: Fit, lines0: StackLine[], poly: Point[], centre
 	return { lines: kept, angle, centre, rect: stackRect(fit, kept, centre, angle) };
 }
 
-const moved = (r: Rect, dx: number, dy: number): Rect => ({
-	x0: r.x0 + dx,
-	y0: r.y0 + dy,
-	x1: r.x1 + dx,
-	y1: r.y1 + dy
-});
+const moved = (r: Rect, dx: number, dy: number): Rect => ({ x0: r.x0 + dx, y0: r.y0 + dy, x1: r.x1 + dx, y1: r.y1 + dy });
 
 /** The nearest place to the stack's own centre where it lies inside the piece clear of the obstacles,
  * trying each set of obstacles in turn (strictest first); on a reduced print, lines the piece list also
@@ -148,10 +140,7 @@ export function placeStack(fit: Fit, stack: Stack, poly: Point[], tiers: Rect[][
 				const [dx, dy] = offsets[i];
 				const r = moved(rect, dx, dy);
 				if (avoid.some((o) => overlaps(r, o, 1.5 * u)) || !inside(i)) continue;
-				return {
-					stack: { ...stack, lines, centre: { x: stack.centre.x + dx, y: stack.centre.y + dy }, rect: r },
-					clear: true
-				};
+				return { stack: { ...stack, lines, centre: { x: stack.centre.x + dx, y: stack.centre.y + dy }, rect: r }, clear: true };
 			}
 		}
 		if (!fit.readable) break;

@@ -73,12 +73,7 @@ interface Shelf {
 function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: ExtraRoom): Placed[][] | null {
 	const items = pieces.map((piece, i) => {
 		const turned = turn && piece.role === 'waistband';
-		return {
-			piece,
-			number: i + 1,
-			turned,
-			...boxSize(piece, k, turned, extra(piece, mapFor(piece, k, turned, 0, 0), i + 1))
-		};
+		return { piece, number: i + 1, turned, ...boxSize(piece, k, turned, extra(piece, mapFor(piece, k, turned, 0, 0), i + 1)) };
 	});
 	if (items.some((it) => it.w > area.w || it.h > area.h)) return null;
 	items.sort((a, b) => b.h - a.h || a.number - b.number);
@@ -100,12 +95,7 @@ function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: Extr
 		}
 		const x = area.x + shelf.x;
 		const y = area.y + shelf.y;
-		page.push({
-			piece: it.piece,
-			number: it.number,
-			map: mapFor(it.piece, k, it.turned, x, y),
-			box: { x, y, w: it.w, h: it.h }
-		});
+		page.push({ piece: it.piece, number: it.number, map: mapFor(it.piece, k, it.turned, x, y), box: { x, y, w: it.w, h: it.h } });
 		shelf.x += it.w + GAP;
 	}
 	pages.push(page);

@@ -8,14 +8,7 @@ export function arrowhead(tip: Point, dir: Point, size: number, role: Role = 'gr
 	const d = unit(dir);
 	const back = sub(tip, mul(d, size));
 	const side = mul(normalOf(d), size * 0.37);
-	return {
-		kind: 'path',
-		role,
-		parts: through([tip, add(back, side), sub(back, side)]),
-		closed: true,
-		noStroke: true,
-		fill: 'ink'
-	};
+	return { kind: 'path', role, parts: through([tip, add(back, side), sub(back, side)]), closed: true, noStroke: true, fill: 'ink' };
 }
 
 /** The grain line: a long double-headed arrow. */
@@ -53,10 +46,7 @@ export function foldBracket(
 		angle,
 		italic: true
 	};
-	return {
-		marks: [path, arrowhead(p1, mul(n, -1), sizes.head, 'fold'), arrowhead(p2, mul(n, -1), sizes.head, 'fold')],
-		word
-	};
+	return { marks: [path, arrowhead(p1, mul(n, -1), sizes.head, 'fold'), arrowhead(p2, mul(n, -1), sizes.head, 'fold')], word };
 }
 
 /** A notch: a short tick (two side by side for the back) cut in from `at` along `inward`. */
@@ -93,14 +83,7 @@ export function dimension(a: Point, b: Point, label: string, size: number, measu
 		});
 	const tick = mul(add(d, normalOf(d)), size * 0.31);
 	for (const p of [a, b]) out.push({ kind: 'path', role: 'dimension', parts: [{ from: sub(p, tick), to: add(p, tick) }] });
-	out.push({
-		kind: 'text',
-		role: 'dimension',
-		at: mid,
-		text: label,
-		size,
-		angle: upright((Math.atan2(d.y, d.x) * 180) / Math.PI)
-	});
+	out.push({ kind: 'text', role: 'dimension', at: mid, text: label, size, angle: upright((Math.atan2(d.y, d.x) * 180) / Math.PI) });
 	return out;
 }
 
@@ -130,14 +113,7 @@ export function scaleBar(
 			[origin.x, ends.left],
 			[origin.x + length, ends.right]
 		] as const)
-			marks.push({
-				kind: 'text',
-				role: 'scale-bar',
-				at: P(x, origin.y + ends.below),
-				text,
-				size: ends.size,
-				baseline: 'alphabetic'
-			});
+			marks.push({ kind: 'text', role: 'scale-bar', at: P(x, origin.y + ends.below), text, size: ends.size, baseline: 'alphabetic' });
 	return { kind: 'group', name: 'scale bar', marks };
 }
 
@@ -147,11 +123,7 @@ const P = (x: number, y: number): Point => ({ x, y });
  * and where the row ends. */
 export function legendMarks(x: number, y: number, u: number, measure: Measure): { marks: Mark[]; end: number } {
 	const at = (dx: number, dy: number) => P(dx * u, y + dy * u);
-	const line = (role: Role, ...pts: [number, number][]): Mark => ({
-		kind: 'path',
-		role,
-		parts: through(pts.map(([a, b]) => at(a, b)))
-	});
+	const line = (role: Role, ...pts: [number, number][]): Mark => ({ kind: 'path', role, parts: through(pts.map(([a, b]) => at(a, b))) });
 	const samples: [string, (x: number) => Mark[]][] = [
 		['seam line', (x) => [line('seam', [x, 0], [x + 16, 0])]],
 		['cutting line', (x) => [line('cutting', [x, 0], [x + 16, 0])]],
@@ -165,15 +137,7 @@ export function legendMarks(x: number, y: number, u: number, measure: Measure): 
 	for (const [label, sample] of samples) {
 		marks.push(...sample(cx));
 		cx += 20;
-		marks.push({
-			kind: 'text',
-			role: 'label',
-			at: at(cx, 2.5),
-			text: label,
-			size: 7 * u,
-			anchor: 'start',
-			baseline: 'alphabetic'
-		});
+		marks.push({ kind: 'text', role: 'label', at: at(cx, 2.5), text: label, size: 7 * u, anchor: 'start', baseline: 'alphabetic' });
 		cx += measure(label, 7 * u) / u + 12;
 	}
 	return { marks, end: cx * u };

@@ -7,7 +7,7 @@ import { boundsOf } from '../outline';
 import { waistWithCaps, type Panel } from '../panel';
 import { grainClearOfDarts } from '../styles/common';
 import { formatLength, type Units } from '../units';
-import { rectPath, segRect, through, type Curve, type Drawing, type Mark, type Measure, type Tone } from './model';
+import { segRect, through, type Curve, type Drawing, type Mark, type Measure, type Tone } from './model';
 import { pieceMarks } from './piece';
 import { freeAlong } from './place';
 import { dartMarks, foldBracket, grainArrow, scaleBar } from './symbols';
@@ -16,21 +16,8 @@ const MARGIN = 4;
 /** Screen drawings size their symbols as a print at about 1:7.5 would (cm of the drawing a point). */
 export const SCREEN_U = 0.27;
 
-type TextOpts = {
-	angle?: number;
-	anchor?: 'start' | 'middle' | 'end';
-	tone?: Tone;
-	weight?: 400 | 600;
-	italic?: boolean;
-};
-const text = (at: Point, s: string, size: number, o: TextOpts = {}): Mark => ({
-	kind: 'text',
-	role: 'label',
-	at,
-	text: s,
-	size,
-	...o
-});
+type TextOpts = { angle?: number; anchor?: 'start' | 'middle' | 'end'; tone?: Tone; weight?: 400 | 600; italic?: boolean };
+const text = (at: Point, s: string, size: number, o: TextOpts = {}): Mark => ({ kind: 'text', role: 'label', at, text: s, size, ...o });
 
 /** A title above, a scale bar below: 10 cm in 1 cm blocks, or 4 inches in half-inch blocks. */
 function frame(marks: Mark[], minX: number, minY: number, maxX: number, maxY: number, title: string, units: Units): Drawing {
@@ -44,16 +31,8 @@ function frame(marks: Mark[], minX: number, minY: number, maxX: number, maxY: nu
 		marks: [
 			text(P(x0 + MARGIN, y0 + 1.8), title, 1.3, { anchor: 'start', weight: 600 }),
 			...marks,
-			scaleBar(bar, length, units === 'in' ? 8 : 10, 0.5, 'paper', {
-				left: '0',
-				right: formatLength(length, units),
-				size: 0.8,
-				below: 1.48
-			}),
-			text(P(bar.x + length + 1.2, bar.y + 0.25), 'scale: 1:1 printed at 100 %', 0.7, {
-				anchor: 'start',
-				tone: 'pencil'
-			})
+			scaleBar(bar, length, units === 'in' ? 8 : 10, 0.5, 'paper', { left: '0', right: formatLength(length, units), size: 0.8, below: 1.48 }),
+			text(P(bar.x + length + 1.2, bar.y + 0.25), 'scale: 1:1 printed at 100 %', 0.7, { anchor: 'start', tone: 'pencil' })
 		]
 	};
 }
@@ -128,15 +107,7 @@ export function piecesView(draft: Draft, units: Units, measure: Measure): Drawin
 		const w = p.bounds.maxX - p.bounds.minX;
 		if (x > 0 && x + w > maxRow) [x, y, rowH] = [0, y + rowH + gap + 2, 0];
 		const [dx, dy] = [x - p.bounds.minX, y - p.bounds.minY];
-		marks.push(
-			...pieceMarks(p, (q) => P(q.x + dx, q.y + dy), {
-				u: SCREEN_U,
-				measure,
-				readable: false,
-				units,
-				notchLabels: true
-			}).marks
-		);
+		marks.push(...pieceMarks(p, (q) => P(q.x + dx, q.y + dy), { u: SCREEN_U, measure, readable: false, units, notchLabels: true }).marks);
 		x += w + gap;
 		right = Math.max(right, x - gap);
 		rowH = Math.max(rowH, p.bounds.maxY - p.bounds.minY);
@@ -151,7 +122,7 @@ export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawin
 	const len = Math.max(lay.layLength, 1);
 	// Lay coordinates (x across, y along) turned a quarter: the length runs left to right, the fold below.
 	const f = (q: Point) => P(q.y, lane - q.x);
-	const marks: Mark[] = [{ kind: 'path', role: 'cloth', parts: rectPath(0, 0, len, lane), closed: true, fill: 'white' }];
+	const marks: Mark[] = [{ kind: 'path', role: 'cloth', parts: through([P(0, 0), P(len, 0), P(len, lane), P(0, lane)]), closed: true, fill: 'white' }];
 	for (const pl of lay.pieces) {
 		const piece = draft.pieces.find((p) => p.id === pl.pieceId);
 		marks.push({ kind: 'path', role: 'cutting', parts: through(pl.outline.map(f)), closed: true, fill: 'white' });
