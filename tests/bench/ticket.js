@@ -2,7 +2,7 @@
 // Ticket PDF: GET of one order's cutting ticket as a signed-in cutter, one request at a time, against
 // a floor made in this (the bench's) process: a one-page pdfkit document in the same embedded Lora
 // faces the ticket uses (latin 400 and 600 from @fontsource/lora's .woff files, their tables inflated
-// once with zlib as src/lib/server/ticket/fonts.ts does), with a heading and a few lines of text.
+// once with zlib by src/lib/server/fonts/woff.js, the converter the ticket uses), with a heading and a few lines of text.
 // Beside it, the same document from the raw .woff files, where fontkit inflates every table in
 // JavaScript for each new document: the cost the ticket code avoids by converting once.
 import { readFileSync } from 'node:fs';
@@ -11,7 +11,7 @@ import { dirname, join } from 'node:path';
 import PDFDocument from 'pdfkit';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { summarise } from './stats.js';
-import { woffToSfnt } from './woff.js';
+import { woffToSfnt } from '../../src/lib/server/fonts/woff.js';
 
 export const TICKET_ROUTE = '/workroom/orders/[id]/ticket.pdf';
 

@@ -30,8 +30,10 @@
  *   are tried (rows "next fit" by height with pieces slid together, and columns of stacked pieces); each
  *   can only need less length on a wider fabric, so the shortest of them can too. The lay is grown by the
  *   shrinkage and rounded up to the sale step.
- * - Drawings (svg.ts, svg-kit.ts): the block, the pieces or the lay as one self-contained SVG in cm, to
- *   scale, in the house drawing conventions, its figures in cm or inches.
+ * - Drawings (drawing/, svg.ts): each drawing is described once as marks with a role (seam, cutting,
+ *   construction, dart, grain, fold, notch, label, dimension, scale bar) in cm, with the words placed
+ *   once (text widths supplied by the back end); svg.ts writes the block, the pieces or the lay as one
+ *   self-contained SVG in cm, and the ticket's pdfkit back end draws the same marks at a stated scale.
  * Plain TypeScript with no framework, DOM or database import and no randomness: the shop draws in the
  * browser and the workroom prints on the server from the same code, and a draft is always the same.
  * Draft.figures are rounded to the millimetre; Draft.exactFigures keep full precision.

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { draftSkirt, STYLES, toSvg } from './index';
+import { estimateWidth } from './drawing/model';
 
 const size12 = { waist: 68, hip: 94, length: 62, waistToHip: 20.6 };
 
@@ -60,5 +61,21 @@ describe('drawings', () => {
 		const lay = toSvg(d, { view: 'layout', units: 'cm', fabric: { width: 150, nap: false, shrinkage: 0 } });
 		expect(lay).toContain('>Buy 90 cm of 150 cm wide fabric');
 		expect(lay).toContain('Lay on 150 cm fabric, folded lengthwise');
+	});
+
+	it('gives the block a grain line in each panel and keeps the hip-line words off the side seam', () => {
+		for (const style of ['straight', 'a-line', 'gored'] as const) {
+			const d = draftSkirt(size12, { style });
+			const svg = toSvg(d, { view: 'block', units: 'cm' });
+			// Grain lines (DESIGN.md: a long double-headed arrow): two filled heads a panel.
+			expect((svg.match(/<path d="M[^"]*Z" fill="#1E2230"\/>/g) ?? []).length, style).toBeGreaterThanOrEqual(4);
+			const m = /<text x="([\d.]+)" y="[\d.]+" font-size="([\d.]+)"[^>]*>(Hip line, half the body: [^<]*)<\/text>/.exec(svg);
+			expect(m, style).not.toBeNull();
+			const [x, size, words] = [Number(m![1]), Number(m![2]), m![3]];
+			const half = estimateWidth(words, size) / 2;
+			// The side seam meets the hip line at the back panel's hip width from the centre back.
+			const side = d.block.back.spec.hip;
+			expect(x + half < side - 0.3 || x - half > side + 0.3, `${style}: words ${x - half}..${x + half}, side seam ${side}`).toBe(true);
+		}
 	});
 });

@@ -2,7 +2,7 @@
 import type { DartFigure, Piece } from '../../drafting';
 import { formatCm } from '../../drafting';
 import type { Frame } from './page-one';
-import { INK, PENCIL, heading, line, widthOf } from './text';
+import { INK, PENCIL, heading, line, table, widthOf } from './text';
 import type { Ticket } from './ticket';
 import { allowanceWords, cutSize } from './words';
 
@@ -34,53 +34,28 @@ export function blockFigures(doc: Doc, t: Ticket, f: Frame, top: number): number
 	const wl = W * 0.58;
 	const x = f.left;
 	const fig = t.draft.figures;
-	let y = heading(doc, 'Block figures, each panel (on the seam line, no allowances)', x, top, wl);
-	const cB = x + wl * 0.78;
-	const cF = x + wl;
-	row(
-		doc,
-		[
-			{ text: 'Back', x: cB, align: 'right', color: PENCIL },
-			{ text: 'Front', x: cF, align: 'right', color: PENCIL }
-		],
-		y + 7,
-		7
-	);
-	y += ROW - 1;
-	const rows: [string, string, string][] = [
-		[
-			'Hip width (centre line to side seam, on the hip line)',
-			formatCm(fig.back.hipWidth),
-			formatCm(fig.front.hipWidth)
-		],
-		['Waist width (to the waist mark, darts open)', formatCm(fig.back.waistWidth), formatCm(fig.front.waistWidth)],
-		['Side shaping (hip width − waist width)', formatCm(fig.back.sideShaping), formatCm(fig.front.sideShaping)],
-		['Side raise (side waist point above the waist line)', formatCm(fig.back.sideRaise), formatCm(fig.front.sideRaise)],
-		['Centre back shaping / centre front drop', formatCm(fig.back.centreShaping), formatCm(fig.front.centreDrop)]
+	const pair = (b: number, fr: number) => [formatCm(b), formatCm(fr)];
+	const rows: string[][] = [
+		['Hip width (centre line to side seam, on the hip line)', ...pair(fig.back.hipWidth, fig.front.hipWidth)],
+		['Waist width (to the waist mark, darts open)', ...pair(fig.back.waistWidth, fig.front.waistWidth)],
+		['Side shaping (hip width − waist width)', ...pair(fig.back.sideShaping, fig.front.sideShaping)],
+		['Side raise (side waist point above the waist line)', ...pair(fig.back.sideRaise, fig.front.sideRaise)],
+		['Centre back shaping / centre front drop', ...pair(fig.back.centreShaping, fig.front.centreDrop)]
 	];
 	const n = Math.max(fig.back.darts.length, fig.front.darts.length);
 	if (n === 0) rows.push(['Darts', 'none', 'none']);
 	for (let i = 0; i < n; i++) {
+		const [b, fr] = [fig.back.darts, fig.front.darts];
 		rows.push([
 			`Dart ${i + 1}: position, centre line to its middle`,
-			dartCell(fig.back.darts, i, 'fromCentre'),
-			dartCell(fig.front.darts, i, 'fromCentre')
+			dartCell(b, i, 'fromCentre'),
+			dartCell(fr, i, 'fromCentre')
 		]);
-		rows.push([`Dart ${i + 1}: intake`, dartCell(fig.back.darts, i, 'intake'), dartCell(fig.front.darts, i, 'intake')]);
-		rows.push([`Dart ${i + 1}: length`, dartCell(fig.back.darts, i, 'length'), dartCell(fig.front.darts, i, 'length')]);
+		rows.push([`Dart ${i + 1}: intake`, dartCell(b, i, 'intake'), dartCell(fr, i, 'intake')]);
+		rows.push([`Dart ${i + 1}: length`, dartCell(b, i, 'length'), dartCell(fr, i, 'length')]);
 	}
-	for (const [label, b, fr] of rows) {
-		row(
-			doc,
-			[
-				{ text: label, x, color: PENCIL, maxWidth: wl * 0.64 },
-				{ text: b, x: cB, align: 'right' },
-				{ text: fr, x: cF, align: 'right' }
-			],
-			y + 8
-		);
-		y += ROW;
-	}
+	let y = heading(doc, 'Block figures, each panel (on the seam line, no allowances)', x, top, wl);
+	y = table(doc, x, y, [x + wl * 0.78, x + wl], rows, { label: wl * 0.64, step: ROW, head: ['Back', 'Front'] });
 	const style = t.draft.style;
 	const note =
 		style === 'half-circle' || style === 'full-circle'
@@ -97,57 +72,18 @@ export function blockFigures(doc: Doc, t: Ticket, f: Frame, top: number): number
 	// Checks, beside the figures.
 	const xr = f.left + wl + 18;
 	const wr = f.right - xr;
-	let yr = heading(doc, 'Checks', xr, top, wr);
-	const rB = xr + wr * 0.78;
-	row(
-		doc,
-		[
-			{ text: 'Back', x: rB, align: 'right', color: PENCIL },
-			{ text: 'Front', x: xr + wr, align: 'right', color: PENCIL }
-		],
-		yr + 7,
-		7
-	);
-	yr += ROW - 1;
 	const c = fig.check;
-	const checks: [string, string, string][] = [
-		['Waist seam, darts closed', formatCm(c.waistSeam.back), formatCm(c.waistSeam.front)],
-		['Hip line', formatCm(c.hipLine.back), formatCm(c.hipLine.front)],
-		['Side seam, waist to hem', formatCm(c.sideSeam.back), formatCm(c.sideSeam.front)],
-		['Dart legs differ by', formatCm(c.dartLegs.back), formatCm(c.dartLegs.front)]
+	let yr = heading(doc, 'Checks', xr, top, wr);
+	const checks = [
+		['Waist seam, darts closed', ...pair(c.waistSeam.back, c.waistSeam.front)],
+		['Hip line', ...pair(c.hipLine.back, c.hipLine.front)],
+		['Side seam, waist to hem', ...pair(c.sideSeam.back, c.sideSeam.front)],
+		['Dart legs differ by', ...pair(c.dartLegs.back, c.dartLegs.front)]
 	];
-	for (const [label, b, fr] of checks) {
-		row(
-			doc,
-			[
-				{ text: label, x: xr, color: PENCIL, maxWidth: wr * 0.55 },
-				{ text: b, x: rB, align: 'right' },
-				{ text: fr, x: xr + wr, align: 'right' }
-			],
-			yr + 8
-		);
-		yr += ROW;
-	}
-	row(
-		doc,
-		[
-			{ text: 'Hem girth, finished', x: xr, color: PENCIL },
-			{ text: formatCm(fig.hemGirth), x: xr + wr, align: 'right' }
-		],
-		yr + 8
-	);
-	yr += ROW;
-	if (fig.waistRadius !== undefined) {
-		row(
-			doc,
-			[
-				{ text: 'Waist radius', x: xr, color: PENCIL },
-				{ text: formatCm(fig.waistRadius), x: xr + wr, align: 'right' }
-			],
-			yr + 8
-		);
-		yr += ROW;
-	}
+	yr = table(doc, xr, yr, [xr + wr * 0.78, xr + wr], checks, { label: wr * 0.55, step: ROW, head: ['Back', 'Front'] });
+	const totals = [['Hem girth, finished', formatCm(fig.hemGirth)]];
+	if (fig.waistRadius !== undefined) totals.push(['Waist radius', formatCm(fig.waistRadius)]);
+	yr = table(doc, xr, yr, [xr + wr], totals, { step: ROW });
 	line(doc, 'Side seams sewn together agree within the house easing.', xr, yr + 8, {
 		size: 6.5,
 		color: PENCIL,

@@ -2,9 +2,11 @@
 // for cut, sewn and finished, the sharp-tools caution, and the footer every page carries.
 import { formatCm } from '../../drafting';
 import { formatMetres } from '../../format';
-import { drawMarker } from './marker';
+import { MARKER_PAD, markerMarks, markerScale } from '../../drafting/drawing/marker';
+import { drawMarks, pdfMeasure } from './draw-pdf';
+import type { Area } from '../../drafting/drawing/sheets';
 import type { Frame } from './page-one';
-import { INK, PENCIL, THREAD, heading, line, para } from './text';
+import { INK, PENCIL, THREAD, heading, line, para, ptPerCm, rule } from './text';
 import type { Ticket } from './ticket';
 
 type Doc = PDFKit.PDFDocument;
@@ -95,11 +97,15 @@ const paraHeight = (doc: Doc, text: string, width: number, size: number) => {
 	return doc.heightOfString(text, { width, lineGap: 1 }) + 2;
 };
 
-/** The lay drawing of a ticket's estimate in a box. */
-export function layDrawing(doc: Doc, t: Ticket, box: { x: number; y: number; w: number; h: number }) {
+/** The lay drawing of a ticket's estimate in a box, pieces numbered as in the piece list. */
+export function layDrawing(doc: Doc, t: Ticket, box: Area) {
 	if (!t.estimate) return;
 	const number = new Map(t.draft.pieces.map((p, i) => [p.id, i + 1]));
-	drawMarker(doc, t.estimate.layout, box, (id) => number.get(id) ?? 0);
+	const layout = t.estimate.layout;
+	const scale = markerScale(layout, box.w, box.h);
+	const k = ptPerCm(scale);
+	const marks = markerMarks(layout, scale, 1 / k, pdfMeasure(doc), (id) => number.get(id) ?? 0);
+	drawMarks(doc, marks, { k, ox: box.x + MARKER_PAD.left, oy: box.y + MARKER_PAD.top });
 }
 
 /** Sign-off boxes for the three workroom stages, from `top`. */
@@ -113,14 +119,7 @@ export function signOff(doc: Doc, f: Frame, top: number) {
 		for (const [j, label] of ['Who', 'Date'].entries()) {
 			const y = top + 28 + j * 16;
 			line(doc, label, x + 6, y, { size: 7.5, color: PENCIL });
-			doc
-				.save()
-				.moveTo(x + 32, y + 1.5)
-				.lineTo(x + w - 8, y + 1.5)
-				.lineWidth(0.4)
-				.strokeColor(PENCIL)
-				.stroke()
-				.restore();
+			rule(doc, x + 32, y + 1.5, x + w - 8, y + 1.5, 0.4, PENCIL);
 		}
 	});
 }
@@ -139,14 +138,7 @@ export function caution(doc: Doc, f: Frame, bottom: number): number {
 /** The footer of every page. */
 export function footer(doc: Doc, t: Ticket, f: Frame, page: number, pages: number) {
 	const y = f.bottom;
-	doc
-		.save()
-		.moveTo(f.left, y - 9)
-		.lineTo(f.right, y - 9)
-		.lineWidth(0.3)
-		.strokeColor(PENCIL)
-		.stroke()
-		.restore();
+	rule(doc, f.left, y - 9, f.right, y - 9, 0.3, PENCIL);
 	line(doc, `${t.number} · ${t.firstName} · page ${page} of ${pages}`, f.left, y, {
 		size: 7,
 		color: PENCIL,

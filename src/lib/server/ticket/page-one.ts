@@ -4,7 +4,7 @@ import { formatCm } from '../../drafting';
 import { formatDate } from '../../format';
 import { STAGE_LABELS } from '../../orders/stages';
 import { drawQr } from './qr';
-import { INK, PENCIL, THREAD, heading, line } from './text';
+import { INK, PENCIL, THREAD, heading, line, rule, table } from './text';
 import type { Ticket } from './ticket';
 import { optionRows, styleKindName } from './words';
 
@@ -24,10 +24,8 @@ export const num = (cm: number) => formatCm(cm).replace(' cm', '');
 const ROW = 11;
 
 /** Label on the left, value on the right of a column. */
-function pair(doc: Doc, label: string, value: string, x: number, w: number, y: number) {
-	line(doc, label, x, y, { size: 8, color: PENCIL, maxWidth: w * 0.5 });
-	line(doc, value, x + w, y, { size: 8, align: 'right', maxWidth: w * 0.55 });
-}
+const pairs = (doc: Doc, rows: string[][], x: number, w: number, y: number) =>
+	table(doc, x, y, [x + w], rows, { label: w * 0.5, value: w * 0.55, step: ROW });
 
 export function workroomUrl(origin: string, t: Ticket) {
 	return `${origin.replace(/\/+$/, '')}/workroom/orders/${t.orderId}`;
@@ -58,7 +56,7 @@ export function header(doc: Doc, t: Ticket, f: Frame, origin: string): number {
 		line(doc, value, x, y + 14, { size: i === 0 ? 13 : 11, weight: 600, maxWidth: 108 });
 	});
 	const y = top + 76;
-	doc.save().moveTo(f.left, y).lineTo(f.right, y).lineWidth(0.6).strokeColor(INK).stroke().restore();
+	rule(doc, f.left, y, f.right, y, 0.6, INK);
 	return y + 8;
 }
 
@@ -96,10 +94,7 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 		],
 		['Skirt length', formatCm(g.length)]
 	];
-	for (const [a, b] of rows) {
-		pair(doc, a, b, x, w, y + 8);
-		y += ROW;
-	}
+	y = pairs(doc, rows, x, w, y);
 	line(doc, 'Length at the side, waist to hem.', x, y + 8, { size: 6.5, color: PENCIL, maxWidth: w });
 	return y + ROW;
 }
@@ -107,13 +102,9 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 function workingValues(doc: Doc, t: Ticket, x: number, w: number, top: number): number {
 	let y = heading(doc, 'Working values, a quarter with ease (cm)', x, top, w);
 	const { measurements: m, rules: r, figures } = t.draft;
-	const cols = [x + w * 0.68, x + w];
-	line(doc, 'Back', cols[0], y + 8, { size: 7, align: 'right', color: PENCIL });
-	line(doc, 'Front', cols[1], y + 8, { size: 7, align: 'right', color: PENCIL });
-	y += ROW;
 	const q = (v: number, e: number) => `${num(v)} + ${num(e)} = ${num(v + e)}`;
 	const hipQ = m.hip / 4 + r.ease.hip;
-	const rows: [string, string, string][] = [
+	const rows = [
 		['Waist ÷ 4 + ease', q(m.waist / 4, r.ease.waist.back), q(m.waist / 4, r.ease.waist.front)],
 		['Hip ÷ 4 + ease', q(m.hip / 4, r.ease.hip), q(m.hip / 4, r.ease.hip)],
 		[
@@ -122,41 +113,31 @@ function workingValues(doc: Doc, t: Ticket, x: number, w: number, top: number): 
 			`${num(hipQ)} + ${num(r.balance)} = ${num(figures.front.hipWidth)}`
 		]
 	];
-	for (const [a, b, c] of rows) {
-		line(doc, a, x, y + 8, { size: 8, color: PENCIL });
-		line(doc, b, cols[0], y + 8, { size: 8, align: 'right' });
-		line(doc, c, cols[1], y + 8, { size: 8, align: 'right' });
-		y += ROW;
-	}
+	y = table(doc, x, y, [x + w * 0.68, x + w], rows, { step: ROW, head: ['Back', 'Front'] });
 	const exact = t.draft.exactFigures;
 	if (Math.abs(exact.back.hipWidth + exact.front.hipWidth - 2 * hipQ) > 0.01) {
 		line(doc, 'Hip line widened to clear the waist.', x, y + 8, { size: 6.5, color: PENCIL });
 		y += ROW;
 	}
-	pair(doc, 'Hip depth', `${formatCm(m.hipDepth)}${m.hipDepthAssumed ? ' (assumed)' : ''}`, x, w, y + 8);
-	y += ROW;
+	const more = [['Hip depth', `${formatCm(m.hipDepth)}${m.hipDepthAssumed ? ' (assumed)' : ''}`]];
 	if (figures.waistRadius !== undefined) {
 		const seam = 2 * (figures.check.waistSeam.back + figures.check.waistSeam.front);
 		const theta = t.draft.style === 'full-circle' ? '2π' : 'π';
-		pair(doc, 'Waist seam all round', formatCm(seam), x, w, y + 8);
-		pair(doc, `Waist radius, seam ÷ ${theta}`, formatCm(figures.waistRadius), x, w, y + 8 + ROW);
-		y += 2 * ROW;
+		more.push(
+			['Waist seam all round', formatCm(seam)],
+			[`Waist radius, seam ÷ ${theta}`, formatCm(figures.waistRadius)]
+		);
 	}
-	return y;
+	return pairs(doc, more, x, w, y);
 }
 
 function options(doc: Doc, t: Ticket, x: number, w: number, top: number): number {
-	let y = heading(doc, 'Style and options', x, top, w);
+	const y = heading(doc, 'Style and options', x, top, w);
 	const rows: [string, string][] = [
 		['Style', styleKindName(t.draft.style)],
 		...optionRows(t.draft.choice, t.draft.rules.waistband.width, t.draft.rules.facingDepth)
 	];
-	for (const [a, b] of rows) {
-		line(doc, a, x, y + 8, { size: 8, color: PENCIL, maxWidth: w * 0.36 });
-		line(doc, b, x + w, y + 8, { size: 8, align: 'right', maxWidth: w * 0.66 });
-		y += ROW;
-	}
-	return y;
+	return table(doc, x, y, [x + w], rows, { label: w * 0.36, value: w * 0.66, step: ROW });
 }
 
 /** Measurements, working values and options side by side; returns the y below the tallest. */

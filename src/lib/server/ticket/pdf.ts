@@ -4,15 +4,13 @@
 import PDFDocument from 'pdfkit';
 import { blockFigures, pieceList } from './figures';
 import type { Piece } from '../../drafting';
-import { DIM_ROOM, type PieceMap } from './draw';
-import { registerLora } from './fonts';
-import { GAP, planPieces, type Area, type Placed } from './layout';
+import { DIM_ROOM, captionRoom } from '../../drafting/drawing/piece';
+import { registerLora } from '../fonts/lora';
+import { GAP, placeOf, planPieces, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
+import { markerScale } from '../../drafting/drawing/marker';
 import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOff } from './lower';
-import { markerScale } from './marker';
 import { banners, facts, header, type Frame } from './page-one';
-import { CAPTION_SPILL, captionHeight, captionLines } from './marks';
-import { planPiece } from './piece';
-import { piecesArea, piecesPage, radiusOf } from './pieces-page';
+import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
 import { MM, heading } from './text';
 import type { Ticket } from './ticket';
 
@@ -53,8 +51,7 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 		const key = `${p.id}:${m.k}:${m.turned}`;
 		if (!fit.has(key)) {
 			const w = (m.turned ? p.bounds.maxY - p.bounds.minY : p.bounds.maxX - p.bounds.minX) * m.k + DIM_ROOM;
-			const lines = captionLines(doc, p, n, w + 2 * CAPTION_SPILL).length;
-			fit.set(key, planPiece(doc, p, m, n, radiusOf(t, p)).clear ? 0 : captionHeight(lines));
+			fit.set(key, captionRoom(p, placeOf(m), ticketStyle(doc, t, p, m, n), w));
 		}
 		return fit.get(key)!;
 	};
@@ -83,8 +80,8 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 	const here = markerBox(f, y, signTop - 10);
 	let move = false;
 	if (t.estimate && spare) {
-		const s1 = here.h > 40 ? markerScale(t.estimate.layout, here) : Infinity;
-		move = s1 >= 50 && markerScale(t.estimate.layout, spare) < s1;
+		const s1 = here.h > 40 ? markerScale(t.estimate.layout, here.w, here.h) : Infinity;
+		move = s1 >= 50 && markerScale(t.estimate.layout, spare.w, spare.h) < s1;
 	}
 	fabric(doc, t, f, y, signTop - 10, move ? `The lay is drawn on page ${pages}, under the pieces.` : undefined);
 	plan.pages.forEach((placed, i) => {

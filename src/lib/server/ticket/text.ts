@@ -1,19 +1,15 @@
-// Palette, units and text drawing for the cutting ticket. Every single line of text goes through
+// Units and text drawing for the cutting ticket. Every single line of text goes through
 // `line`, which sets it on its baseline in Lora, run by run (see fonts.ts), shrunk or cut to fit.
-import { runsOf, useFont, type Weight } from './fonts';
+import { PALETTE } from '../../drafting/drawing/model';
+import { runsOf, useFont, type Weight } from '../fonts/lora';
 
-/** The product palette (DESIGN.md). */
-export const INK = '#1E2230';
-export const CHALK = '#35598A';
-export const THREAD = '#A8323E';
-export const PENCIL = '#6B6F7A';
-export const PAPER = '#F6F1E7';
+/** The one palette (the drawing model's), by the names page layout uses. */
+export const { ink: INK, chalk: CHALK, thread: THREAD, pencil: PENCIL, paper: PAPER } = PALETTE;
 
 /** PDF points in a millimetre: 72 points to the inch, 25.4 mm to the inch. */
 export const MM = 72 / 25.4;
 
-/** Page points per centimetre of cloth at a scale 1:n. */
-export const ptPerCm = (n: number) => (10 * MM) / n;
+export { ptPerCm } from '../../drafting/drawing/model';
 
 type Doc = PDFKit.PDFDocument;
 
@@ -94,16 +90,36 @@ export function para(
 	return h;
 }
 
+/** A straight rule from (x0, y0) to (x1, y1). */
+export const rule = (doc: Doc, x0: number, y0: number, x1: number, y1: number, width: number, color: string) =>
+	doc.save().moveTo(x0, y0).lineTo(x1, y1).lineWidth(width).strokeColor(color).stroke().restore();
+
 /** A section heading with a hairline under it; returns the y below it. */
 export function heading(doc: Doc, text: string, x: number, top: number, width: number): number {
 	line(doc, text, x, top + 9, { size: 9.5, weight: 600, color: INK });
-	doc
-		.save()
-		.moveTo(x, top + 12.5)
-		.lineTo(x + width, top + 12.5)
-		.lineWidth(0.4)
-		.strokeColor(PENCIL)
-		.stroke()
-		.restore();
+	rule(doc, x, top + 12.5, x + width, top + 12.5, 0.4, PENCIL);
 	return top + 17;
+}
+
+/** Rows of a table from `top`: each a label in pencil (within `label` points), then its values set
+ * right at the columns' right edges; a head row names the columns. Returns the y below. */
+export function table(
+	doc: Doc,
+	x: number,
+	top: number,
+	cols: number[],
+	rows: string[][],
+	o: { label?: number; value?: number; step: number; head?: string[] }
+): number {
+	let y = top;
+	if (o.head) {
+		o.head.forEach((h, i) => line(doc, h, cols[i], y + 7, { size: 7, align: 'right', color: PENCIL }));
+		y += o.step - 1;
+	}
+	for (const [label, ...values] of rows) {
+		line(doc, label, x, y + 8, { size: 8, color: PENCIL, maxWidth: o.label });
+		values.forEach((v, i) => line(doc, v, cols[i], y + 8, { size: 8, align: 'right', maxWidth: o.value }));
+		y += o.step;
+	}
+	return y;
 }

@@ -1,4 +1,4 @@
-// Lora, embedded from the shipped @fontsource/lora package. Fontsource splits the face into subsets
+// Lora for PDFs, embedded from the shipped @fontsource/lora package. Fontsource splits the face into subsets
 // (latin, latin-ext, cyrillic...) by Unicode range, so a name like "Łucja" or a fabric called
 // "Šaty" needs its letters drawn from the subset that has them: text is cut into runs, each run set
 // in the first subset whose range holds its characters. The .woff files are used because fontkit
@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
-import { inflateSync } from 'node:zlib';
+import { woffToSfnt } from './woff.js';
 
 export type Weight = 400 | 600;
 
@@ -41,48 +41,6 @@ function parseRanges(css: string): Map<Subset, [number, number][]> {
 		});
 		out.set(subset as Subset, ranges);
 	}
-	return out;
-}
-
-/** A WOFF 1.0 file unpacked to the plain font it wraps (W3C WOFF File Format 1.0, sections 3–5): each
- * table inflated with Node's zlib once, here, instead of by fontkit's JavaScript inflater in every
- * document. The glyphs are the same bytes either way. */
-export function woffToSfnt(woff: Buffer): Buffer {
-	if (woff.readUInt32BE(0) !== 0x774f4646) throw new Error('Not a WOFF file');
-	const flavor = woff.readUInt32BE(4);
-	const numTables = woff.readUInt16BE(12);
-	const tables = Array.from({ length: numTables }, (_, i) => {
-		const at = 44 + i * 20;
-		const offset = woff.readUInt32BE(at + 4);
-		const compLength = woff.readUInt32BE(at + 8);
-		const origLength = woff.readUInt32BE(at + 12);
-		const raw = woff.subarray(offset, offset + compLength);
-		return {
-			tag: woff.readUInt32BE(at),
-			checksum: woff.readUInt32BE(at + 16),
-			data: compLength < origLength ? inflateSync(raw) : raw
-		};
-	});
-	let entrySelector = 0;
-	while (2 ** (entrySelector + 1) <= numTables) entrySelector++;
-	const searchRange = 2 ** entrySelector * 16;
-	const head = 12 + numTables * 16;
-	const size = tables.reduce((n, t) => n + ((t.data.length + 3) & ~3), head);
-	const out = Buffer.alloc(size);
-	out.writeUInt32BE(flavor, 0);
-	out.writeUInt16BE(numTables, 4);
-	out.writeUInt16BE(searchRange, 6);
-	out.writeUInt16BE(entrySelector, 8);
-	out.writeUInt16BE(numTables * 16 - searchRange, 10);
-	let offset = head;
-	tables.forEach((t, i) => {
-		out.writeUInt32BE(t.tag, 12 + i * 16);
-		out.writeUInt32BE(t.checksum, 16 + i * 16);
-		out.writeUInt32BE(offset, 20 + i * 16);
-		out.writeUInt32BE(t.data.length, 24 + i * 16);
-		t.data.copy(out, offset);
-		offset += (t.data.length + 3) & ~3;
-	});
 	return out;
 }
 

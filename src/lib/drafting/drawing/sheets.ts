@@ -1,10 +1,11 @@
-// Where each piece goes on the pieces page, and at which scale. The scales are the reduction series of
-// technical drawing, 1:5, 1:10, 1:20 (ISO 5455 [from memory]), so a cutter can read them with a scale
-// rule. The largest scale at which every piece fits on one page wins; portrait before landscape, and
-// the waistband (a long strip) may lie along the page.
-import type { Piece } from '../../drafting';
-import { DIM_ROOM, type PieceMap } from './draw';
-import { ptPerCm } from './text';
+// Pieces on sheets of paper: where each piece goes and at which scale, in points of paper. For a reduced
+// print the scales are the reduction series of technical drawing, 1:5, 1:10, 1:20 (ISO 5455 [from
+// memory]), so a cutter can read them with a scale rule; a full-size print passes [1]. The largest scale
+// at which every piece fits on one sheet wins; portrait before landscape, and the waistband (a long
+// strip) may lie along the sheet. Each piece keeps room left of and below it for its dimension lines.
+import type { Piece } from '../pieces';
+import { ptPerCm } from './model';
+import { DIM_ROOM, type PlaceMap } from './piece';
 
 export interface Area {
 	x: number;
@@ -12,6 +13,20 @@ export interface Area {
 	w: number;
 	h: number;
 }
+
+/** Piece centimetres to page points: scaled, and for a long strip turned a quarter turn anticlockwise. */
+export interface PieceMap {
+	k: number;
+	turned: boolean;
+	ox: number;
+	oy: number;
+}
+
+/** The same place in cm of a drawing that the page shows at k points a cm from its corner. */
+export const placeOf =
+	(m: PieceMap): PlaceMap =>
+	(p) =>
+		m.turned ? { x: m.ox / m.k + p.y, y: m.oy / m.k - p.x } : { x: m.ox / m.k + p.x, y: m.oy / m.k + p.y };
 
 /** A piece with its place on a page. */
 export interface Placed {
@@ -44,9 +59,7 @@ function boxSize(p: Piece, k: number, turned: boolean, extra: number) {
 
 function mapFor(p: Piece, k: number, turned: boolean, x: number, y: number): PieceMap {
 	const b = p.bounds;
-	return turned
-		? { k, turned, ox: x + DIM_ROOM - b.minY * k, oy: y + b.maxX * k }
-		: { k, turned, ox: x + DIM_ROOM - b.minX * k, oy: y - b.minY * k };
+	return turned ? { k, turned, ox: x + DIM_ROOM - b.minY * k, oy: y + b.maxX * k } : { k, turned, ox: x + DIM_ROOM - b.minX * k, oy: y - b.minY * k };
 }
 
 interface Shelf {
@@ -60,12 +73,7 @@ interface Shelf {
 function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: ExtraRoom): Placed[][] | null {
 	const items = pieces.map((piece, i) => {
 		const turned = turn && piece.role === 'waistband';
-		return {
-			piece,
-			number: i + 1,
-			turned,
-			...boxSize(piece, k, turned, extra(piece, mapFor(piece, k, turned, 0, 0), i + 1))
-		};
+		return { piece, number: i + 1, turned, ...boxSize(piece, k, turned, extra(piece, mapFor(piece, k, turned, 0, 0), i + 1)) };
 	});
 	if (items.some((it) => it.w > area.w || it.h > area.h)) return null;
 	items.sort((a, b) => b.h - a.h || a.number - b.number);
@@ -87,12 +95,7 @@ function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: Extr
 		}
 		const x = area.x + shelf.x;
 		const y = area.y + shelf.y;
-		page.push({
-			piece: it.piece,
-			number: it.number,
-			map: mapFor(it.piece, k, it.turned, x, y),
-			box: { x, y, w: it.w, h: it.h }
-		});
+		page.push({ piece: it.piece, number: it.number, map: mapFor(it.piece, k, it.turned, x, y), box: { x, y, w: it.w, h: it.h } });
 		shelf.x += it.w + GAP;
 	}
 	pages.push(page);
@@ -100,12 +103,7 @@ function pack(pieces: Piece[], k: number, area: Area, turn: boolean, extra: Extr
 }
 
 /** The plan for a set of pieces: `areaFor` gives the drawing area of a portrait or landscape page. */
-export function planPieces(
-	pieces: Piece[],
-	areaFor: (landscape: boolean) => Area,
-	ladder: readonly number[],
-	extra: ExtraRoom = () => 0
-): PiecesPlan {
+export function planPieces(pieces: Piece[], areaFor: (landscape: boolean) => Area, ladder: readonly number[], extra: ExtraRoom = () => 0): PiecesPlan {
 	let fallback: PiecesPlan | null = null;
 	for (const scale of ladder) {
 		const k = ptPerCm(scale);

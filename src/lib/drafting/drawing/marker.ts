@@ -1,0 +1,123 @@
+// The lay drawn as a marker: the fabric as it lies on the table (its length across), every piece where the
+// lay put it, numbered as in the piece list, with its edges named, the grain, the lay's length and width,
+// and a scale bar. Centimetres of cloth from the lay's top-left corner; words and symbols sized in points
+// of paper (`u` cm each), so the same marker reads at 1:25 on a ticket or at full size.
+import type { Layout } from '../fabric';
+import { formatCm } from '../units';
+import { ptPerCm, through, type Mark, type Measure } from './model';
+import { arrowhead, scaleBar } from './symbols';
+
+/** The band across the lay the pieces take (a piece may reach past the fold's edge when laid whole). */
+function laneOf(layout: Layout) {
+	let [min, max] = [0, layout.laneWidth];
+	for (const p of layout.pieces)
+		for (const q of p.outline) {
+			min = Math.min(min, q.x);
+			max = Math.max(max, q.x);
+		}
+	return { min, max };
+}
+
+/** A labelled scale bar at `at`: five blocks over a round true length between about 15 and 45 mm on paper
+ * (`u` cm of the drawing a point), its ends written under it. */
+export function ruledBar(at: { x: number; y: number }, u: number): { mark: Mark; length: number } {
+	const length = [10, 20, 50, 100, 200].find((c) => c / u >= 40) ?? 200;
+	const ends = { left: '0', right: formatCm(length), size: 6.5 * u, below: 11 * u };
+	return { mark: scaleBar(at, length, 5, 3.2 * u, 'white', ends), length };
+}
+
+/** Whether the marker carries the line that says what a dashed outline means. */
+const needsLegend = (layout: Layout) => layout.folded && layout.pieces.some((p) => p.layers === 1);
+
+// 1:25 sits between 1:20 and 1:50 on metric scale rules (common practice).
+const MARKER_SCALES = [10, 20, 25, 50, 100] as const;
+/** Room (points) the marker's words, grain arrow and scale bar take round the lay itself: markerMarks
+ * draws the lay from (left, top) of a box. */
+export const MARKER_PAD = { left: 16, top: 6, bottom: 32, right: 38 };
+
+/** The scale (1:n) at which a lay and its words fit a box of w × h points. */
+export function markerScale(layout: Layout, w: number, h: number): number {
+	const lane = laneOf(layout);
+	const P = MARKER_PAD;
+	const room = { w: w - P.left - P.right, h: h - P.top - P.bottom - (needsLegend(layout) ? 10 : 0) };
+	const fits = (n: number) => layout.layLength * ptPerCm(n) <= room.w && (lane.max - lane.min) * ptPerCm(n) <= room.h;
+	return MARKER_SCALES.find(fits) ?? MARKER_SCALES[MARKER_SCALES.length - 1];
+}
+
+export function markerMarks(layout: Layout, scale: number, u: number, measure: Measure, numberOf: (pieceId: string) => number): Mark[] {
+	const lane = laneOf(layout);
+	const at = (p: { x: number; y: number }) => ({ x: p.y, y: p.x - lane.min });
+	const [L, H] = [layout.layLength, lane.max - lane.min];
+	const small = 6.5 * u;
+	const word = (x: number, y: number, text: string, o: Partial<Extract<Mark, { kind: 'text' }>> = {}): Mark => ({
+		kind: 'text',
+		role: 'label',
+		at: { x, y },
+		text,
+		size: small,
+		baseline: 'alphabetic',
+		...o
+	});
+	const marks: Mark[] = [
+		{
+			kind: 'path',
+			role: 'cloth',
+			parts: through([
+				{ x: 0, y: 0 },
+				{ x: L, y: 0 },
+				{ x: L, y: H },
+				{ x: 0, y: H }
+			]),
+			closed: true,
+			fill: 'paper',
+			noStroke: true
+		},
+		{
+			kind: 'path',
+			role: 'cloth',
+			parts: through([
+				{ x: 0, y: 0 },
+				{ x: L, y: 0 }
+			]),
+			dashed: layout.folded
+		},
+		{
+			kind: 'path',
+			role: 'cloth',
+			parts: through([
+				{ x: 0, y: H },
+				{ x: L, y: H }
+			])
+		},
+		word(L + 3 * u, 0, layout.folded ? 'fold' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' }),
+		word(L + 3 * u, H, layout.folded ? 'selvedges' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' })
+	];
+	for (const p of layout.pieces) {
+		if (!p.outline.length) continue;
+		marks.push({
+			kind: 'path',
+			role: 'cutting',
+			parts: through([...p.outline, p.outline[0]].map(at)),
+			closed: true,
+			fill: 'white',
+			dashed: p.layers === 1 && layout.folded
+		});
+		const c = p.outline.reduce((a, q) => ({ x: a.x + q.x / p.outline.length, y: a.y + q.y / p.outline.length }), { x: 0, y: 0 });
+		marks.push(word(at(c).x, at(c).y, String(numberOf(p.pieceId)), { size: 7 * u, weight: 600, baseline: 'middle' }));
+	}
+	// Grain runs along the selvedge: a double-headed arrow under the lay, then the scale and its bar.
+	const gy = H + 18 * u;
+	const [g1, g2] = [
+		{ x: 0, y: gy },
+		{ x: 50 * u, y: gy }
+	];
+	marks.push({ kind: 'path', role: 'grain', parts: through([g1, g2]) }, arrowhead(g2, { x: 1, y: 0 }, 4 * u), arrowhead(g1, { x: -1, y: 0 }, 4 * u));
+	marks.push(word(g2.x + 4 * u, gy + 2.3 * u, 'grain', { anchor: 'start' }), word(L / 2, H + 8 * u, `lay ${formatCm(L)}`));
+	marks.push(word(-4 * u, H / 2, `${formatCm(H)}${layout.folded ? ' folded' : ''}`, { baseline: 'middle', angle: 90 }));
+	const sx = 92 * u;
+	const ratio = `Scale 1:${scale}`;
+	marks.push(word(sx, gy + 2.3 * u, ratio, { anchor: 'start', weight: 600 }));
+	marks.push(ruledBar({ x: sx + measure(ratio, small, 600) + 8 * u, y: gy - 1.6 * u }, u).mark);
+	if (needsLegend(layout)) marks.push(word(0, gy + 16 * u, 'Dashed outline: a piece needed from one layer only.', { anchor: 'start', tone: 'pencil' }));
+	return marks;
+}
