@@ -119,6 +119,9 @@ export interface Figures {
 	length: number;
 	hipDepth: number;
 	hipDepthAssumed: boolean;
+	/** Waist to knee the draft used (the vent's reach, the pencil taper's end), and whether it was assumed. */
+	kneeDepth: number;
+	kneeAssumed: boolean;
 	/** Circle styles: radius of the waist circle. */
 	waistRadius?: number;
 	/** Round the finished hem of the style (a full skirt's sweep). */
@@ -144,14 +147,16 @@ function panelFigures(p: Panel): PanelFigures {
 }
 
 /** The block's figures at full precision (the style adds its radius and hem girth). */
-export function blockFigures(b: Block, hipDepthAssumed: boolean): Omit<Figures, 'hemGirth'> {
+export function blockFigures(b: Block, m: Pick<ResolvedMeasurements, 'hipDepthAssumed' | 'kneeDepth' | 'kneeAssumed'>): Omit<Figures, 'hemGirth'> {
 	const legs = (p: Panel) => Math.max(0, ...p.darts.map((d) => Math.abs(dartLegs(d)[0] - dartLegs(d)[1])));
 	return {
 		back: { ...panelFigures(b.back), centreShaping: b.back.spec.centreShaping },
 		front: { ...panelFigures(b.front), centreDrop: b.front.spec.centreDrop },
 		length: b.length,
 		hipDepth: b.hipDepth,
-		hipDepthAssumed,
+		hipDepthAssumed: m.hipDepthAssumed,
+		kneeDepth: m.kneeDepth,
+		kneeAssumed: m.kneeAssumed,
 		check: {
 			waistSeam: { front: b.front.waistSeam, back: b.back.waistSeam },
 			hipLine: { front: b.front.hipPoint.x - b.front.centreHip.x, back: b.back.hipPoint.x - b.back.centreHip.x },

@@ -11,7 +11,7 @@ import { circleStyle } from './styles/circle';
 import type { Outline, StyleContext, StyleResult } from './styles/common';
 import { fittedStyle } from './styles/fitted';
 import { goredStyle } from './styles/gored';
-import { toMm } from './units';
+import { formatCm, toMm } from './units';
 
 /** A drafted skirt: its figures, its pieces ready to cut, and what the shopper or cutter should know. */
 export interface Draft {
@@ -76,6 +76,8 @@ function rounded(f: Figures): Figures {
 		length: toMm(f.length),
 		hipDepth: toMm(f.hipDepth),
 		hipDepthAssumed: f.hipDepthAssumed,
+		kneeDepth: toMm(f.kneeDepth),
+		kneeAssumed: f.kneeAssumed,
 		hemGirth: toMm(f.hemGirth),
 		check: { waistSeam: pair(f.check.waistSeam), hipLine: pair(f.check.hipLine), sideSeam: pair(f.check.sideSeam), dartLegs: pair(f.check.dartLegs) }
 	};
@@ -104,8 +106,14 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 		outlines.push(pocketBag(front.side, ctx));
 	}
 	const pieces = outlines.map((o) => toPiece(o, c, r));
-	const exactFigures: Figures = { ...blockFigures(block, m.hipDepthAssumed), hemGirth: hemGirth(pieces) };
+	const exactFigures: Figures = { ...blockFigures(block, m), hemGirth: hemGirth(pieces) };
 	if (style.waistRadius !== undefined) exactFigures.waistRadius = style.waistRadius;
 	const warnings = [...measurementWarnings(m), ...(isCircle(c.style) ? [] : blockWarnings(block, m)), ...resolved.warnings];
+	const fitted = c.style === 'straight' || c.style === 'pencil';
+	if (m.kneeAssumed && fitted && m.length > m.kneeDepth - r.vent.pencilAboveKnee - 5) {
+		warnings.push(
+			`You did not give your waist-to-knee length, so we used ${formatCm(m.kneeDepth)}, a usual figure: it decides how far your vent opens. For a closer fit, measure down your side from your waist to the middle of your knee.`
+		);
+	}
 	return { style: c.style, choice: c, measurements: m, rules: r, figures: rounded(exactFigures), exactFigures, block, pieces, warnings };
 }
