@@ -6,6 +6,7 @@ import { measurementWarnings, resolveMeasurements, validateMeasurements, type Me
 import { isCircle, resolveChoice, type ResolvedChoice, type SkirtChoiceInput, type StyleId } from './options';
 import { hemGirth, toPiece, type Piece } from './pieces';
 import { resolveRules, type HouseRules, type HouseRulesInput } from './rules';
+import { largestHip, planBlock } from './suppression';
 import { aLineStyle } from './styles/aline';
 import { circleStyle } from './styles/circle';
 import type { Outline, StyleContext, StyleResult } from './styles/common';
@@ -71,7 +72,7 @@ function rounded(f: Figures): Figures {
 	});
 	const pair = (c: CheckPair): CheckPair => ({ front: toMm(c.front), back: toMm(c.back) });
 	const out: Figures = {
-		back: { ...panel(f.back), centreShaping: toMm(f.back.centreShaping) },
+		back: { ...panel(f.back), centreShaping: toMm(f.back.centreShaping), centreDrop: toMm(f.back.centreDrop) },
 		front: { ...panel(f.front), centreDrop: toMm(f.front.centreDrop) },
 		length: toMm(f.length),
 		hipDepth: toMm(f.hipDepth),
@@ -95,7 +96,24 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 	const resolved = resolveChoice(choice, m, r);
 	if (resolved.problems.length) throw new DraftInputError(resolved.problems);
 	const c = resolved.choice;
-	const block = draftBlock(m, r, c.closure.position === 'side' && c.vent === 'none');
+	const backOnFold = c.closure.position === 'side' && c.vent === 'none';
+	if (!m.confirmed && !isCircle(c.style)) {
+		const over = [undefined, ...(m.fit.oneHip ? (['left', 'right'] as const) : [])].some((side) => planBlock(m, r, backOnFold, side).deepDarts);
+		if (over) {
+			const limit = largestHip(m, r, backOnFold);
+			throw new DraftInputError([
+				{
+					field: 'hip',
+					message: `Please check your hip: ${formatCm(m.hip)} over a ${formatCm(m.waist)} waist is more shaping than darts can take (up to about ${formatCm(Math.floor(limit))} fits a block). If it is right, confirm it: we then draft it with the side seams taking the rest, and advise a fitting in calico.`,
+					value: m.hip,
+					limit,
+					max: Math.floor(limit),
+					confirmable: true
+				}
+			]);
+		}
+	}
+	const block = draftBlock(m, r, backOnFold);
 	const ctx: StyleContext = { m, rules: r, choice: c, block };
 	const style = styleOf(ctx);
 	const outlines: Outline[] = [...style.panels];
