@@ -1,7 +1,7 @@
 // draftSkirt: measurements → checked → block → style → pieces with allowances → figures and warnings.
 import { blockFigures, blockWarnings, draftBlock, type Block, type CheckPair, type Figures, type PanelFigures } from './block';
 import { DraftInputError } from './errors';
-import { facing, pocketBag, waistband } from './extras';
+import { facing, pocketBag, waistband, withZipTrim } from './extras';
 import { measurementWarnings, resolveMeasurements, validateMeasurements, type Measurements, type ResolvedMeasurements } from './measurements';
 import { isCircle, resolveChoice, type ResolvedChoice, type SkirtChoiceInput, type StyleId } from './options';
 import { hemGirth, toPiece, type Piece } from './pieces';
@@ -123,7 +123,8 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 		const front = style.panels.find((p) => p.side.length && p.id.includes('front'))!;
 		outlines.push(pocketBag(front.side, ctx));
 	}
-	const pieces = outlines.map((o) => toPiece(o, c, r));
+	const trimmed = c.closure.position === 'side' ? outlines.map((o) => withZipTrim(o, r.allowances.seam, r.allowances.zipSeam)) : outlines;
+	const pieces = trimmed.map((o) => toPiece(o, c, r));
 	const exactFigures: Figures = { ...blockFigures(block, m), hemGirth: hemGirth(pieces) };
 	if (style.waistRadius !== undefined) exactFigures.waistRadius = style.waistRadius;
 	const warnings = [...measurementWarnings(m), ...(isCircle(c.style) ? [] : blockWarnings(block, m)), ...resolved.warnings];

@@ -179,6 +179,8 @@ export function resolveChoice(input: SkirtChoiceInput | undefined, m: ResolvedMe
 	if (pockets && m.length < rules.pocket.fromWaist + rules.pocket.opening + 12) {
 		pockets = false;
 		warnings.push('Your skirt is too short for pockets in the side seams, so it has none.');
+	} else if (pockets && position === 'side') {
+		warnings.push('Your zip is in the left side seam, so your pocket goes in the right side seam only.');
 	}
 	const choice: ResolvedChoice = {
 		style,

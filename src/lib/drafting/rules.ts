@@ -156,10 +156,26 @@ export const DEFAULT_RULES: HouseRules = {
 };
 
 const INCH = 2.54;
-/** The same defaults for a shop working in inches: allowances ⅝″ (¾″ at a zip), hem 1½″, narrow hem ½″. */
+/** Rules that are not lengths (shares, rates, angles, counts): kept as they are in inches. */
+const NOT_LENGTHS = ['styles', 'side.minShare', 'darts.maxAngle', 'darts.maxCount', 'darts.backShare', 'darts.lengthGrowth.perCm', 'suppression'];
+/** A length in whole inch steps as a tape reads them: ½″ from 10 cm, ¼″ from 2 cm, ⅛″ below. */
+const inchStep = (cm: number) => {
+	const step = cm >= 10 ? 0.5 : cm >= 2 ? 0.25 : 0.125;
+	return Math.max(0.125, Math.round(cm / INCH / step) * step) * INCH;
+};
+function inInches(v: unknown, path: string): unknown {
+	if (NOT_LENGTHS.some((p) => path === p || path.startsWith(`${p}.`))) return v;
+	if (typeof v === 'number') return v === 0 ? 0 : inchStep(v);
+	if (typeof v === 'object' && v !== null) return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, inInches(x, path ? `${path}.${k}` : k)]));
+	return v;
+}
+/** The same defaults for a shop working in inches: every length a whole number of eighths (so the figures
+ * a cutter reads to ⅛″ are the lengths drafted), allowances ⅝″ (¾″ at a zip), hem 1½″, narrow hem ½″. */
 export const DEFAULT_RULES_INCH: HouseRules = {
-	...DEFAULT_RULES,
-	allowances: { seam: 0.625 * INCH, zipSeam: 0.75 * INCH, hem: 1.5 * INCH, circleHem: 0.5 * INCH, facingEdge: 0.375 * INCH, liningHem: 1.25 * INCH }
+	...(inInches(DEFAULT_RULES, '') as HouseRules),
+	allowances: { seam: 0.625 * INCH, zipSeam: 0.75 * INCH, hem: 1.5 * INCH, circleHem: 0.5 * INCH, facingEdge: 0.375 * INCH, liningHem: 1.25 * INCH },
+	// Cloth sold by the yard goes in ⅛ yard steps, 4.5″ (TRADE.md, from memory for the steps).
+	fabric: { saleStep: 4.5 * INCH, endAllowance: 2 * INCH }
 };
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);

@@ -6,6 +6,7 @@ import { P, type Point } from './geometry';
 import { boundsOf } from './outline';
 import { waistWithCaps, type Panel } from './panel';
 import { INK, PENCIL, CHALK, THREAD, drawPiece, esc, foldBracket, grainArrow, n, pathD, polyline, scaleBar, text } from './svg-kit';
+import { grainClearOfDarts } from './styles/common';
 import { formatLength, type Units } from './units';
 
 /** What to draw and in which units the figures are written. */
@@ -66,7 +67,15 @@ function blockView(draft: Draft, units: Units): string {
 	s += panelPath(back, L, id) + panelPath(front, L, mirror);
 	const fig = draft.figures;
 	const small = 0.9;
-	s += text(P(W / 2, d - 0.8), `Hip line, half the body: ${formatLength(fig.back.hipWidth + fig.front.hipWidth, units)}`, small, { fill: PENCIL });
+	// The hip-line label sits inside the back panel, sized to end short of the side seam.
+	const hipLabel = `Hip line, half the body: ${formatLength(fig.back.hipWidth + fig.front.hipWidth, units)}`;
+	const hipSize = Math.min(small, (back.spec.hip - 1.6) / (0.52 * hipLabel.length));
+	s += text(P(0.8, d - 0.8), hipLabel, hipSize, { fill: PENCIL, anchor: 'start' });
+	// Grain lines: parallel to the centre lines, clear of the darts and of the panel names.
+	for (const [p, f] of [[back, id], [front, mirror]] as const) {
+		const x = grainClearOfDarts(p.spec.hip, p.darts, 0.22);
+		s += grainArrow(f(P(x, d + 2.5)), f(P(x, L - 2.5)), 1);
+	}
 	s += text(P(back.spec.hip / 2, d + 1.4), `Back ${formatLength(fig.back.hipWidth, units)}`, small);
 	s += text(P(back.spec.hip + front.spec.hip / 2, d + 1.4), `Front ${formatLength(fig.front.hipWidth, units)}`, small);
 	s += text(P(W / 2, -2.6), `Waist line · back mark ${formatLength(fig.back.waistWidth, units)} · front mark ${formatLength(fig.front.waistWidth, units)}`, small, { fill: PENCIL });

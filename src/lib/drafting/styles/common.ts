@@ -29,7 +29,7 @@ export interface NotchSpec {
 
 /** A marking line inside a piece (drawn pencil grey, dashed). */
 export interface MarkLine {
-	kind: 'hip-line' | 'fold-line' | 'band-fold' | 'vent-line';
+	kind: 'hip-line' | 'fold-line' | 'band-fold' | 'vent-line' | 'trim-line';
 	points: Point[];
 }
 
@@ -120,7 +120,9 @@ export function panelNotches(kind: 'front' | 'back', side: Segment[], hipAlongSi
 	else if (back && centreZip) out.push({ at: at(centreZip, closure.length), label: 'zip' });
 	if (pockets) {
 		const p = ctx.rules.pocket;
-		out.push({ at: at(side, p.fromWaist), label: 'pocket' }, { at: at(side, p.fromWaist + p.opening), label: 'pocket' });
+		// With the zip in the left side seam, the pocket goes in the right one only.
+		const label = closure.position === 'side' ? 'pocket (right side)' : 'pocket';
+		out.push({ at: at(side, p.fromWaist), label }, { at: at(side, p.fromWaist + p.opening), label });
 	}
 	return out;
 }
