@@ -1,6 +1,7 @@
 // draftSkirt: measurements → checked → block → style → pieces with allowances → figures and warnings.
 import { blockFigures, blockWarnings, draftBlock, type Block, type CheckPair, type Figures, type PanelFigures } from './block';
 import { DraftInputError } from './errors';
+import { joinSides } from './asymmetric';
 import { facing, pocketBag, waistband, withZipTrim } from './extras';
 import { measurementWarnings, resolveMeasurements, validateMeasurements, type Measurements, type ResolvedMeasurements } from './measurements';
 import { isCircle, resolveChoice, type ResolvedChoice, type SkirtChoiceInput, type StyleId } from './options';
@@ -25,8 +26,10 @@ export interface Draft {
 	figures: Figures;
 	/** The same figures at full precision. */
 	exactFigures: Figures;
-	/** The block the style was derived from (drawn by the 'block' view). */
+	/** The block the style was derived from (drawn by the 'block' view); the wearer's right half when
+	 * her left is drafted apart (then `left` holds the left half's block and figures). */
 	block: Block;
+	left?: { block: Block; figures: Figures; exactFigures: Figures };
 	pieces: Piece[];
 	/** Plain sentences in the second person for the shopper or cutter. */
 	warnings: string[];
@@ -113,18 +116,13 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 			]);
 		}
 	}
-	const block = draftBlock(m, r, backOnFold);
-	const ctx: StyleContext = { m, rules: r, choice: c, block };
-	const style = styleOf(ctx);
-	const outlines: Outline[] = [...style.panels];
-	outlines.push(...(c.waistband === 'band' ? [waistband(ctx)] : facings(ctx, style.panels)));
-	if (c.lining) outlines.push(...style.lining(m.length - r.lining.shorter));
-	if (c.pockets) {
-		const front = style.panels.find((p) => p.side.length && p.id.includes('front'))!;
-		outlines.push(pocketBag(front.side, ctx));
-	}
-	const trimmed = c.closure.position === 'side' ? outlines.map((o) => withZipTrim(o, r.allowances.seam, r.allowances.zipSeam)) : outlines;
-	const pieces = trimmed.map((o) => toPiece(o, c, r));
+	const one = m.fit.oneHip;
+	const trim = (os: Outline[]) => (c.closure.position === 'side' ? os.map((o) => withZipTrim(o, r.allowances.seam, r.allowances.zipSeam)) : os);
+	// The wearer's right is drafted first (her left too when the halves differ, and joined to it).
+	const right = sideOutlines({ m, rules: r, choice: c, block: draftBlock(m, r, backOnFold, one ? 'right' : undefined), bodySide: one ? 'right' : undefined });
+	const left = one ? sideOutlines({ m, rules: r, choice: c, block: draftBlock(m, r, backOnFold, 'left'), bodySide: 'left' }) : null;
+	const { block, style } = right;
+	const pieces = (left ? joinSides(trim(right.outlines), left.outlines) : trim(right.outlines)).map((o) => toPiece(o, c, r));
 	const exactFigures: Figures = { ...blockFigures(block, m), hemGirth: hemGirth(pieces) };
 	if (style.waistRadius !== undefined) exactFigures.waistRadius = style.waistRadius;
 	const warnings = [...measurementWarnings(m), ...(isCircle(c.style) ? [] : blockWarnings(block, m)), ...resolved.warnings];
@@ -134,5 +132,26 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 			`You did not give your waist-to-knee length, so we used ${formatCm(m.kneeDepth)}, a usual figure: it decides how far your vent opens. For a closer fit, measure down your side from your waist to the middle of your knee.`
 		);
 	}
-	return { style: c.style, choice: c, measurements: m, rules: r, figures: rounded(exactFigures), exactFigures, block, pieces, warnings };
+	const draft: Draft = { style: c.style, choice: c, measurements: m, rules: r, figures: rounded(exactFigures), exactFigures, block, pieces, warnings };
+	if (left) {
+		const leftExact: Figures = { ...blockFigures(left.block, m), hemGirth: exactFigures.hemGirth };
+		if (left.style.waistRadius !== undefined) leftExact.waistRadius = left.style.waistRadius;
+		draft.left = { block: left.block, figures: rounded(leftExact), exactFigures: leftExact };
+		warnings.push(`Your ${one!.side} hip is drafted from its own figure, so the pattern is cut open: full pieces instead of on the fold, left and right pieces instead of pairs.`);
+	}
+	return draft;
+}
+
+/** One side's outlines: the style's panels, the waist finish, the lining and the pocket bag. */
+function sideOutlines(ctx: StyleContext) {
+	const { choice: c, m, rules: r } = ctx;
+	const style = styleOf(ctx);
+	const outlines: Outline[] = [...style.panels];
+	outlines.push(...(c.waistband === 'band' ? [waistband(ctx)] : facings(ctx, style.panels)));
+	if (c.lining) outlines.push(...style.lining(m.length - r.lining.shorter));
+	if (c.pockets) {
+		const front = style.panels.find((p) => p.side.length && p.id.includes('front'))!;
+		outlines.push(pocketBag(front.side, ctx));
+	}
+	return { block: ctx.block, style, outlines };
 }

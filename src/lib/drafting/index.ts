@@ -61,6 +61,7 @@ export { MEASUREMENT_LIMITS, validateMeasurements, type Measurements, type Resol
 export type { BackFigures, Block, CheckPair, DartFigure, Figures, FrontFigures, PanelFigures } from './block';
 export type { DartGeom, Panel, PanelSpec } from './panel';
 export { pathProblems } from './checks';
+export { FIT_LIMITS, fitWords, hasFit, NO_FIT, resolveFit, type BodySide, type FitAdjustments, type ResolvedFit } from './fit';
 export type { CutInstruction, Label, Notch, Piece, PieceDart } from './pieces';
 export type { MarkLine } from './styles/common';
 export type { ClosedPath, CubicSegment, Edge, LineSegment, Point, Segment } from './geometry';

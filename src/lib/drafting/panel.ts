@@ -84,11 +84,10 @@ export const highHipLevel = (hipDepth: number) => Math.min(9, 0.5 * hipDepth);
 function sideCurve(S: Point, H: Point, lift: number): CubicSegment {
 	const shaping = Math.max(0, H.x - S.x);
 	const drop = H.y - S.y;
-	const k = 2 + 0.5 * lift;
-	const a = 0.4 + 0.25 * lift;
-	const b = 0.35 - 0.15 * lift;
-	// c1.x never passes H.x, so the curve never bulges past the hip line (k·a ≤ 1).
-	return cubic(S, P(S.x + Math.min(1, k * a) * shaping, S.y + a * drop), P(H.x, H.y - b * drop), H, 'side');
+	// c1 moves out and up, c2 down toward H as `lift` grows: the curve stands further out at every height
+	// (so the high-hip fullness found by bisection is monotone); c1.x never passes H.x, so the curve never
+	// bulges past the hip line.
+	return cubic(S, P(S.x + (0.8 + 0.2 * lift) * shaping, S.y + (0.4 - 0.2 * lift) * drop), P(H.x, H.y - (0.35 - 0.15 * lift) * drop), H, 'side');
 }
 
 /** x of a curve running down (y increasing along it) at height y, by bisection. */

@@ -1,6 +1,7 @@
 // What every style hands on to become pieces, and the parts most styles share: a side seam below the
 // hip line, the hem squared to the seams, the back vent, the notches a cutter snips.
 import type { Block } from '../block';
+import type { BodySide } from '../fit';
 import {
 	P,
 	add,
@@ -60,6 +61,8 @@ export interface StyleContext {
 	rules: HouseRules;
 	choice: ResolvedChoice;
 	block: Block;
+	/** Set when the wearer's left and right halves are drafted apart: which one this is. */
+	bodySide?: BodySide;
 }
 
 /** A style's own pieces (before waist finish, lining and pockets are added) and its own figures. */
