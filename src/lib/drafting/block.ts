@@ -54,7 +54,8 @@ function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules): Pa
 		raise: plan.raise,
 		darts: plan.darts.map((intake, i) => ({ intake, fromCentre: at[i], length: plan.dartLength })),
 		seam: plan.seam,
-		highHip: m.fit.highHip / 4
+		highHip: m.fit.highHip / 4,
+		pointLimit: m.hipDepth - rules.darts.clearAboveHip
 	};
 }
 

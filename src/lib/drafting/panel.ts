@@ -44,6 +44,8 @@ export interface PanelSpec {
 	darts: { intake: number; fromCentre: number; length: number }[];
 	/** The waist seam this panel must measure with its darts closed. */
 	seam: number;
+	/** Dart points stay at or above this depth (the hip line less the house clearance). */
+	pointLimit?: number;
 	/** High hip: the side curve this much further out at the high hip level (HIGH_HIP below the waist). */
 	highHip?: number;
 }
@@ -171,15 +173,17 @@ function buildAt(spec: PanelSpec, sideX: number): Panel {
 		const M = pointAt(base, t);
 		const tM = tangentAt(base, t);
 		const half = dart.intake / 2;
-		const point = P(M.x, M.y + dart.length);
-		const beta = Math.atan2(half, dart.length);
+		// The point never passes the clearance above the hip line, wherever the waist meets the dart.
+		const len = spec.pointLimit === undefined ? dart.length : Math.max(1, Math.min(dart.length, spec.pointLimit - M.y));
+		const point = P(M.x, M.y + len);
+		const beta = Math.atan2(half, len);
 		const top1 = P(M.x - half, M.y);
 		const top2 = P(M.x + half, M.y);
 		// Each side of the dart is turned by half its angle, so folding it shut lines the two tangents up.
 		const leftDir = rotate(tM, -beta);
 		const rightDir = rotate(tM, beta);
 		const capY = (top1.y + (leftDir.y / leftDir.x) * half + top2.y - (rightDir.y / rightDir.x) * half) / 2;
-		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: dart.length });
+		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: len });
 		parts.push([darts.length > 1 ? waistRun(start, startDir, top1, leftDir, dist(start, top1) / 3) : hermite(start, startDir, top1, leftDir, 'waist')]);
 		start = top2;
 		startDir = rightDir;

@@ -49,7 +49,8 @@ const FULL_DROP_AT = 12;
 
 /** The longest a dart may be on this panel: its point clear of the hip line by the house margin. */
 export function longestDart(hipDepth: number, drop: number, rules: HouseRules): number {
-	return Math.max(3, hipDepth - rules.darts.clearAboveHip - Math.max(0, drop));
+	// 3 mm kept for the waist curving a little below the waist line where a dart meets it.
+	return Math.max(3, hipDepth - rules.darts.clearAboveHip - Math.max(0, drop) - 0.3);
 }
 
 /** The widest one dart may be on a panel whose darts may be `longest` long: within the house's largest
