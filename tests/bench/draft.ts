@@ -97,7 +97,8 @@ function randomJobs(n: number): { jobs: Job[]; rejected: number } {
 		const depth = knownDepth ? between(10, 35) : 22;
 		const hip = between(Math.max(70, waist - 10), Math.min(200, waist + 4.8 * depth));
 		const length = between(Math.ceil(depth + 5), 130);
-		const m: Measurements = { waist, hip, length, ...(knownDepth ? { waistToHip: depth } : {}) };
+		// Confirmed: figures past what a block usually fits are drafted once the shopper confirms them.
+		const m: Measurements = { waist, hip, length, confirmed: true, ...(knownDepth ? { waistToHip: depth } : {}) };
 		if (validateMeasurements(m).length) {
 			rejected++;
 			continue;

@@ -26,9 +26,10 @@ describe('the house block (common practice: the atelier’s own method, no publi
 		expect(f.back.sideRaise).toBe(1);
 		// The front side seam is the longer (5.5 cm of shaping against 2.5): its waist point is lowered until
 		// the two differ by no more than the house easing of 0.5 cm.
-		expect(f.front.sideRaise).toBeGreaterThan(0.7);
+		expect(f.front.sideRaise).toBeGreaterThanOrEqual(0.6);
 		expect(f.front.sideRaise).toBeLessThan(1);
-		expect(f.check.sideSeam.front - f.check.sideSeam.back).toBeCloseTo(0.5, 1);
+		expect(f.check.sideSeam.front - f.check.sideSeam.back).toBeGreaterThan(0.3);
+		expect(f.check.sideSeam.front - f.check.sideSeam.back).toBeLessThanOrEqual(0.5);
 		expect(f.hipDepth).toBe(22);
 		expect(f.length).toBe(60);
 	});
@@ -66,19 +67,23 @@ describe('the house block (common practice: the atelier’s own method, no publi
 		expect(d.warnings).toContain('Your waist and hip are close in size, so the back darts are left out and the side seams take the shaping.');
 	});
 
-	it('brings in a second dart when one would take more than the house limit (W 70, H 110)', () => {
+	it('brings in a second dart when one would take more than the house limit, the back taking more (W 70, H 110)', () => {
 		const f = draftSkirt({ waist: 70, hip: 110, length: 62, waistToHip: 21 }).exactFigures;
-		// By hand: quarter waist 18; front hip 29.5, suppression 11.5: the side would take 8.5, more than its
-		// 6 cm limit, so the darts take 3 + 2.5 = 5.5, over the 3.5 a dart may take: two darts of 2.75.
-		expect(f.front.darts.map((x) => x.intake)).toEqual([2.75, 2.75]);
+		// By hand: quarter waist 18; back hip 27.5, suppression 9.5: side 5.5, centre 1, dart 3. Front hip
+		// 29.5, suppression 11.5: the side would take 8.5, past its 6 cm limit, so 2.5 cm more goes to darts.
+		// 60 % of that goes to the back (house share; TRADE.md: the seat takes more intake at the back):
+		// 1.5 cm of hip width moves from the front to the back. Back darts 3 + 1.5 = 4.5, over the 3.5 a
+		// dart may take: two of 2.25; front darts 3 + 1 = 4: two of 2.
+		expect(f.back.darts.map((x) => x.intake)).toEqual([2.25, 2.25]);
+		expect(f.front.darts.map((x) => x.intake)).toEqual([2, 2]);
+		expect(f.back.hipWidth).toBeCloseTo(29, 9);
+		expect(f.front.hipWidth).toBeCloseTo(28, 9);
 		expect(f.front.sideShaping).toBeCloseTo(6, 9);
-		expect(f.front.waistWidth).toBeCloseTo(23.5, 9);
-		// Placed 3.5 cm apart on the closed seam around the usual position: 8.875 and 15.125 from the centre.
-		expect(f.front.darts[0].fromCentre).toBeCloseTo(8.875, 1);
-		expect(f.front.darts[1].fromCentre).toBeCloseTo(15.125, 1);
-		// Back: suppression 9.5, side 5.5, one dart of 3 and the 1 cm centre back take-in.
-		expect(f.back.darts.map((x) => x.intake)).toEqual([3]);
 		expect(f.back.sideShaping).toBeCloseTo(5.5, 9);
+		expect(f.front.waistWidth).toBeCloseTo(22, 9);
+		// Placed 3.5 cm apart on the closed seam around the usual position.
+		expect(f.front.darts[0].fromCentre).toBeCloseTo(9.25, 1);
+		expect(f.front.darts[1].fromCentre).toBeCloseTo(14.75, 1);
 	});
 
 	it('drafts a waist larger than the hip without back darts and says so', () => {

@@ -4,6 +4,7 @@ import { segmentLength } from './geometry';
 import type { ResolvedMeasurements } from './measurements';
 import { dartLegs, draftPanel, type Panel, type PanelSpec } from './panel';
 import type { HouseRules } from './rules';
+import type { BodySide } from './fit';
 import { planBlock, type BlockPlan, type PanelPlan } from './suppression';
 
 /** Both panels of the block with the plan they came from. */
@@ -16,7 +17,8 @@ export interface Block {
 }
 
 /** Open positions (from the shaped centre, along the waist) of a panel's darts. Scaled on small or large
- * panels so a dart stays between 30 % and 60 % of the way to the side; two darts keep `spacing` between. */
+ * panels so the darts centre between 30 % and 60 % of the way to the side; several darts keep `spacing`
+ * between them (less on a narrow panel) and stay within the middle 70 % of the seam. */
 export function dartPositions(kind: 'front' | 'back', darts: number[], seam: number, rules: HouseRules): number[] {
 	if (!darts.length) return [];
 	const total = darts.reduce((a, b) => a + b, 0);
@@ -24,30 +26,36 @@ export function dartPositions(kind: 'front' | 'back', darts: number[], seam: num
 	const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
 	const centre = clamp(rules.darts.fromCentre[kind], 0.3 * span, 0.6 * span);
 	if (darts.length === 1) return [clamp(centre - darts[0] / 2, 0.25 * seam, 0.65 * seam) + darts[0] / 2];
-	// Two darts: positions on the closed seam (u), then opened out by the intakes before each.
-	const g = Math.min(rules.darts.spacing, 0.7 * seam);
-	let u1 = centre - total / 2 - g / 2;
-	let u2 = u1 + g;
-	if (u1 < 0.15 * seam) [u1, u2] = [0.15 * seam, 0.15 * seam + g];
-	if (u2 > 0.85 * seam) [u1, u2] = [Math.max(0.15 * seam, 0.85 * seam - g), 0.85 * seam];
-	return [u1 + darts[0] / 2, u2 + darts[0] + darts[1] / 2];
+	// Several darts: positions on the closed seam (u), then opened out by the intakes before each.
+	const n = darts.length;
+	let g = Math.min(rules.darts.spacing, (0.7 * seam) / (n - 1));
+	let u1 = centre - total / 2 - (g * (n - 1)) / 2;
+	if (u1 < 0.15 * seam) u1 = 0.15 * seam;
+	if (u1 + g * (n - 1) > 0.85 * seam) {
+		u1 = Math.max(0.15 * seam, 0.85 * seam - g * (n - 1));
+		g = (0.85 * seam - u1) / (n - 1);
+	}
+	let before = 0;
+	return darts.map((d, j) => {
+		const at = u1 + j * g + before + d / 2;
+		before += d;
+		return at;
+	});
 }
 
-function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules, raise = plan.raise): PanelSpec {
-	const drop = plan.kind === 'front' ? rules.centreFrontDrop : 0;
-	// The dart point stays clear above the hip line whatever the house length.
-	const maxLength = Math.max(3, m.hipDepth - rules.darts.clearAboveHip - drop);
-	const length = Math.min(rules.darts.length[plan.kind], maxLength);
+function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules): PanelSpec {
 	const at = dartPositions(plan.kind, plan.darts, plan.seam, rules);
 	return {
 		kind: plan.kind,
 		hip: plan.hip,
 		hipDepth: m.hipDepth,
 		centreShaping: plan.centre,
-		centreDrop: drop,
-		raise,
-		darts: plan.darts.map((intake, i) => ({ intake, fromCentre: at[i], length })),
-		seam: plan.seam
+		centreDrop: plan.drop,
+		raise: plan.raise,
+		darts: plan.darts.map((intake, i) => ({ intake, fromCentre: at[i], length: plan.dartLength })),
+		seam: plan.seam,
+		highHip: m.fit.highHip / 4,
+		pointLimit: m.hipDepth - rules.darts.clearAboveHip
 	};
 }
 
@@ -55,20 +63,30 @@ function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules, rai
 export const blockSideSeam = (p: Panel, length: number) => segmentLength(p.hipCurve) + (length - p.spec.hipDepth);
 
 /** Drafts the block. Where the front and back side seams differ by more than the house easing, the longer
- * seam's waist point is lowered until they agree within it (never below the waist line). */
-export function draftBlock(m: ResolvedMeasurements, rules: HouseRules, backOnFold = false): Block {
-	const plan = planBlock(m, rules, backOnFold);
+ * seam's waist point is lowered until they agree within it (never below the waist line, nor below a higher
+ * hip's raise); where it cannot go lower, the shorter seam's waist point is raised instead. */
+export function draftBlock(m: ResolvedMeasurements, rules: HouseRules, backOnFold = false, bodySide?: BodySide): Block {
+	const plan = planBlock(m, rules, backOnFold, bodySide);
 	let back = draftPanel(specOf(plan.back, m, rules));
 	let front = draftPanel(specOf(plan.front, m, rules));
-	for (let i = 0; i < 6; i++) {
+	for (let i = 0; i < 8; i++) {
 		const diff = blockSideSeam(front, m.length) - blockSideSeam(back, m.length);
-		const excess = Math.abs(diff) - rules.side.easing;
-		if (excess <= 1e-6) break;
-		const longer = diff > 0 ? front : back;
-		if (longer.spec.raise <= 1e-9) break;
-		const next = draftPanel({ ...longer.spec, raise: Math.max(0, longer.spec.raise - excess) });
-		if (diff > 0) front = next;
-		else back = next;
+		// Aim a little inside the easing, so a step that falls short still lands within it.
+		const excess = Math.abs(diff) - 0.9 * rules.side.easing;
+		if (Math.abs(diff) - rules.side.easing <= 1e-6) break;
+		const longerIsFront = diff > 0;
+		const longer = longerIsFront ? front : back;
+		const floor = (longerIsFront ? plan.front : plan.back).raiseFloor;
+		if (longer.spec.raise > floor + 1e-9) {
+			const next = draftPanel({ ...longer.spec, raise: Math.max(floor, longer.spec.raise - excess) });
+			if (longerIsFront) front = next;
+			else back = next;
+		} else {
+			const shorter = longerIsFront ? back : front;
+			const next = draftPanel({ ...shorter.spec, raise: shorter.spec.raise + excess });
+			if (longerIsFront) back = next;
+			else front = next;
+		}
 	}
 	return { back, front, plan, length: m.length, hipDepth: m.hipDepth };
 }
@@ -95,9 +113,11 @@ export interface PanelFigures {
 	darts: DartFigure[];
 }
 
-/** The back panel's figures, with the centre back take-in. */
+/** The back panel's figures, with the centre back take-in and the centre back waist below the waist line
+ * (a hollow back lowers it; a prominent seat raises it, negative). */
 export interface BackFigures extends PanelFigures {
 	centreShaping: number;
+	centreDrop: number;
 }
 
 /** The front panel's figures, with the centre front drop. */
@@ -119,6 +139,9 @@ export interface Figures {
 	length: number;
 	hipDepth: number;
 	hipDepthAssumed: boolean;
+	/** Waist to knee the draft used (the vent's reach, the pencil taper's end), and whether it was assumed. */
+	kneeDepth: number;
+	kneeAssumed: boolean;
 	/** Circle styles: radius of the waist circle. */
 	waistRadius?: number;
 	/** Round the finished hem of the style (a full skirt's sweep). */
@@ -144,14 +167,16 @@ function panelFigures(p: Panel): PanelFigures {
 }
 
 /** The block's figures at full precision (the style adds its radius and hem girth). */
-export function blockFigures(b: Block, hipDepthAssumed: boolean): Omit<Figures, 'hemGirth'> {
+export function blockFigures(b: Block, m: Pick<ResolvedMeasurements, 'hipDepthAssumed' | 'kneeDepth' | 'kneeAssumed'>): Omit<Figures, 'hemGirth'> {
 	const legs = (p: Panel) => Math.max(0, ...p.darts.map((d) => Math.abs(dartLegs(d)[0] - dartLegs(d)[1])));
 	return {
-		back: { ...panelFigures(b.back), centreShaping: b.back.spec.centreShaping },
+		back: { ...panelFigures(b.back), centreShaping: b.back.spec.centreShaping, centreDrop: b.back.spec.centreDrop },
 		front: { ...panelFigures(b.front), centreDrop: b.front.spec.centreDrop },
 		length: b.length,
 		hipDepth: b.hipDepth,
-		hipDepthAssumed,
+		hipDepthAssumed: m.hipDepthAssumed,
+		kneeDepth: m.kneeDepth,
+		kneeAssumed: m.kneeAssumed,
 		check: {
 			waistSeam: { front: b.front.waistSeam, back: b.back.waistSeam },
 			hipLine: { front: b.front.hipPoint.x - b.front.centreHip.x, back: b.back.hipPoint.x - b.back.centreHip.x },
@@ -177,8 +202,10 @@ export function blockWarnings(b: Block, m: ResolvedMeasurements): string[] {
 	}
 	if (plan.deepDarts) {
 		out.push(
-			'There is a large difference between your waist and hip, so the darts are deeper than usual. We advise a fitting in calico before your fabric is cut.'
+			'There is a very large difference between your waist and hip, more than darts can take: the side seams take the rest. We advise a fitting in calico before your fabric is cut.'
 		);
+	} else if ([plan.back, plan.front].some((p) => p.darts.length > 2)) {
+		out.push('There is a large difference between your waist and hip, so the shaping is shared between three darts a panel. We advise a fitting in calico before your fabric is cut.');
 	}
 	return out;
 }

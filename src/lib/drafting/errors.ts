@@ -6,6 +6,12 @@ export interface FieldProblem {
 	message: string;
 	min?: number;
 	max?: number;
+	/** The number given, and the limit it went past, where the problem is about one number. */
+	value?: number;
+	limit?: number;
+	/** The figure is possible but outside what a block is drafted for: the engine drafts it once the shopper
+	 * confirms it (`Measurements.confirmed`); the shop asks "did you mean …?" first. */
+	confirmable?: boolean;
 }
 
 /** Thrown for any measurement, choice or house rule the engine cannot draft from; lists every bad field. */

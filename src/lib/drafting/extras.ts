@@ -1,7 +1,12 @@
 // Pieces that come with the options: the waistband or the facings, the pocket bags.
 import {
 	P,
+	add,
 	angleBetween,
+	mul,
+	normalOf,
+	pointAt,
+	tangentAt,
 	cubic,
 	line,
 	rotateAbout,
@@ -16,7 +21,9 @@ import {
 	type Point,
 	type Segment
 } from './geometry';
+import { inside } from './checks';
 import { lineSegment } from './intersect';
+import { flatten } from './outline';
 import { minRadius, removeLoops } from './loops';
 import { offsetSegment } from './offset';
 import type { DartGeom } from './panel';
@@ -122,33 +129,63 @@ export function waistband(ctx: StyleContext): Outline {
 	};
 }
 
-/** An in-seam pocket bag, its seam edge the front side seam round the opening; cut four (two pairs). */
+/** An in-seam pocket bag, its seam edge the front side seam round the opening, built along that seam
+ * whichever way the style's side seam runs (plumb on a straight skirt, aslant on a half circle, level on a
+ * full circle): the edge is turned so the opening runs down the bag's grain, which keeps it from
+ * stretching. Four bags (two pairs), or one pair when the zip takes the left side seam. */
 export function pocketBag(frontSide: Segment[], ctx: StyleContext): Outline {
 	const p = ctx.rules.pocket;
 	const a0 = Math.max(0, p.fromWaist - 2);
 	const a1 = p.fromWaist + p.opening + 2;
-	const edge = withEdge(subPath(frontSide, a0, a1), 'bag-seam');
+	const raw = withEdge(subPath(frontSide, a0, a1), 'bag-seam');
+	const first = raw[0].from;
+	const chord = sub(raw[raw.length - 1].to, first);
+	// Turn the edge about its start so the chord points straight down (a rotation: the piece's inside stays
+	// on the same hand of the seam, toward the centre).
+	const turn = angleBetween(chord, P(0, 1));
+	const edge = mapSegments(raw, (q) => rotateAbout(q, first, turn));
 	const t0 = edge[0].from;
 	const t1 = edge[edge.length - 1].to;
 	const w = p.width;
 	const h = t1.y - t0.y;
 	const inner = P(t0.x - 0.8 * w, t0.y);
 	const round = cubic(t1, P(t1.x - 0.2 * w, t1.y + 0.35 * h), P(inner.x, inner.y + 0.75 * h), inner, 'bag');
+	const oneSide = ctx.choice.closure.position === 'side';
 	return {
 		id: 'pocket-bag',
 		name: 'Pocket bag',
 		fabric: 'shell',
 		role: 'pocket',
-		cut: { count: 4, onFold: false },
+		cut: { count: oneSide ? 2 : 4, onFold: false },
 		segments: [...edge, round, line(inner, t0, 'bag')],
 		darts: [],
 		waistParts: [],
 		side: [],
 		notches: [{ at: edge.length ? pointOnEdge(edge, p.fromWaist - a0) : t0, label: 'pocket' }, { at: pointOnEdge(edge, p.fromWaist - a0 + p.opening), label: 'pocket' }],
 		lines: [],
-		notes: ['Skirt fabric, or lining for a lighter pocket'],
+		notes: [oneSide ? 'Right side seam only: the zip is in the left' : 'Skirt fabric, or lining for a lighter pocket'],
 		grainX: t0.x - 0.45 * w
 	};
+}
+
+/** With the zip in the left side seam, a piece cut on the fold or in pairs has both its side seams cut
+ * with the zip's wider allowance; this line marks the usual allowance, so the cutter trims the right side
+ * seam back to it (the left keeps the zip's). Returns the outline with the line and a note added. */
+export function withZipTrim(o: Outline, seamAllowance: number, zipAllowance: number): Outline {
+	const sides = o.segments.filter((x) => x.edge === 'side');
+	if (!sides.length || zipAllowance <= seamAllowance) return o;
+	const poly = flatten(o.segments, 2);
+	const lines = sides.map((x) => {
+		const pts: Point[] = [];
+		for (let i = 0; i <= 12; i++) {
+			const q = pointAt(x, i / 12);
+			const n = normalOf(tangentAt(x, i / 12));
+			const a = add(q, mul(n, seamAllowance));
+			pts.push(inside(a, poly) ? add(q, mul(n, -seamAllowance)) : a);
+		}
+		return { kind: 'trim-line' as const, points: pts };
+	});
+	return { ...o, lines: [...o.lines, ...lines], notes: [...o.notes, 'Right side seam: trim to the dashed line beside it; the zip side keeps its allowance'] };
 }
 
 const pointOnEdge = (edge: Segment[], d: number) => subPath(edge, 0, d).at(-1)?.to ?? edge[0].from;

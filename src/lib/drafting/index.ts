@@ -2,21 +2,28 @@
  * Quarterline drafting engine: the skirt a pattern cutter drafts by hand, computed.
  *
  * How it works
- * - Input: four measurements in cm (waist, hip, length at the side, waist-to-hip depth if known), a style
- *   with options, and the house rules (every default overridable, merged over DEFAULT_RULES). Bad input
- *   throws one DraftInputError naming every field with its allowed range (validateMeasurements gives the
- *   same list without throwing); nothing returns NaN.
+ * - Input: four measurements in cm (waist, hip, length at the side, waist-to-hip depth if known), the
+ *   waist-to-knee length if known (else the house default, said so), optional fit adjustments (fit.ts), a
+ *   style with options, and the house rules (every default overridable, merged over DEFAULT_RULES). Bad
+ *   input throws one DraftInputError naming every field with its allowed range (validateMeasurements gives
+ *   the same list without throwing); a figure past what a block fits (a waist far over the hip, more
+ *   shaping than darts can take) is a `confirmable` problem with its value and limit, drafted once
+ *   `confirmed` is set. Nothing returns NaN.
  * - The block (suppression.ts, panel.ts, block.ts): quarter measures with ease, back and front balanced
  *   about the side seam, the waist suppression shared between centre back, darts and side seam. On a
- *   usual figure that is the house method exactly; on unusual ones the darts shrink, vanish or split into
- *   two, the side seam never flares, and a waist larger than the hip widens the hip line. Each waist is a
+ *   usual figure that is the house method exactly; on unusual ones the darts shrink, vanish or split (up
+ *   to three a panel), grow longer with their intake, never open past the house's largest angle nor reach
+ *   past the hip line less its margin; intake beyond the usual goes mostly to the back; the side seam
+ *   never flares, and a waist larger than the hip widens the hip line. Fit adjustments move the centre
+ *   waists, the darts, the back hip and the side curve; one hip higher or fuller drafts each half from its
+ *   own figure and asymmetric.ts joins them into pieces cut open. Each waist is a
  *   cubic curve through the darts, square to the centre line and to the side seam, each dart's two sides
  *   turned by half its angle so the waist runs on smoothly when the dart is folded shut (its cap). Then it
  *   is trued as a cutter trues it: the side waist point moves along the waist until the waist seam,
  *   measured along the curve with the darts closed, is exactly the intended quarter waist; and where the
  *   front and back side seams differ by more than the house easing the longer one's waist point is lowered.
- * - Styles (styles/*.ts) are derivations from the block: straight (a vent past the knee), pencil (taken in
- *   at the side seams, always vented in a woven), A-line (the side-most dart closed, fully or in part, into
+ * - Styles (styles/*.ts) are derivations from the block: straight (a vent past the knee, opening to about
+ *   the knee), pencil (taken in at the side seams down to the knee, vented in a woven near or past it), A-line (the side-most dart closed, fully or in part, into
  *   hem flare by rotation about its point; the side seam adds the rest), half and full circle (waist radius
  *   = waist seam / θ), six gores (panel seams through the darts, flaring below the hip). extras.ts adds the
  *   waistband or the facings (the waist with the darts closed), lining and pocket bags.
@@ -63,6 +70,7 @@ export { MEASUREMENT_LIMITS, validateMeasurements, type Measurements, type Resol
 export type { BackFigures, Block, CheckPair, DartFigure, Figures, FrontFigures, PanelFigures } from './block';
 export type { DartGeom, Panel, PanelSpec } from './panel';
 export { pathProblems } from './checks';
+export { FIT_LIMITS, fitWords, hasFit, NO_FIT, resolveFit, type BodySide, type FitAdjustments, type ResolvedFit } from './fit';
 export type { CutInstruction, Label, Notch, Piece, PieceDart } from './pieces';
 export type { MarkLine } from './styles/common';
 export type { ClosedPath, CubicSegment, Edge, LineSegment, Point, Segment } from './geometry';

@@ -53,8 +53,11 @@ describe('measurements', () => {
 		const e = problemsOf({ waist: 50, hip: 99, length: 40, waistToHip: 10 });
 		expect(e.fields).toEqual([expect.objectContaining({ field: 'hip', max: 98 })]);
 		expect(e.fields[0].message).toMatch(/^Please check your hip and your waist-to-hip depth/);
-		// A waist larger than the hip is never refused for it.
-		expect(validateMeasurements({ waist: 200, hip: 70, length: 40, waistToHip: 10 })).toEqual([]);
+		// A waist larger than the hip is never refused outright: past 20 cm over the hip (rare, from memory)
+		// it is asked to be confirmed, with the numbers, and drafted once it is.
+		expect(validateMeasurements({ waist: 200, hip: 70, length: 40, waistToHip: 10, confirmed: true })).toEqual([]);
+		expect(validateMeasurements({ waist: 200, hip: 70, length: 40, waistToHip: 10 })).toEqual([expect.objectContaining({ field: 'waist', value: 200, limit: 90, confirmable: true })]);
+		expect(validateMeasurements({ waist: 90, hip: 70, length: 40, waistToHip: 10 })).toEqual([]);
 	});
 
 	it('says when it assumed the hip depth, and when a value is near the edge of the range', () => {

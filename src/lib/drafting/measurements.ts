@@ -1,5 +1,6 @@
 // The shopper's four measurements: what the engine accepts, and the sentences it says about them.
 import { DraftInputError, type FieldProblem } from './errors';
+import { resolveFit, type FitAdjustments, type ResolvedFit } from './fit';
 import type { HouseRules } from './rules';
 import { formatCm } from './units';
 
@@ -10,6 +11,13 @@ export interface Measurements {
 	length: number;
 	/** Waist line to hip line, at the side; when missing the house default is used and said so. */
 	waistToHip?: number;
+	/** Waist line to the middle of the knee, at the side; when missing the house default is used and said
+	 * so. Decides "past the knee", the vent's reach and where a pencil skirt stops tapering. */
+	waistToKnee?: number;
+	/** The shopper has confirmed a figure outside what a block is usually drafted for (see FieldProblem). */
+	confirmed?: boolean;
+	/** Corrections for the figure beyond the girths (none when absent). */
+	adjustments?: FitAdjustments;
 }
 
 /** Measurements as drafted: the hip depth always known, and whether it was assumed. */
@@ -19,6 +27,10 @@ export interface ResolvedMeasurements {
 	length: number;
 	hipDepth: number;
 	hipDepthAssumed: boolean;
+	kneeDepth: number;
+	kneeAssumed: boolean;
+	confirmed: boolean;
+	fit: ResolvedFit;
 }
 
 /** Plausible input ranges (cm). Waist and hip: TRADE.md input-check ranges [from memory]; waist to hip
@@ -28,13 +40,19 @@ export const MEASUREMENT_LIMITS = {
 	waist: { min: 50, max: 200 },
 	hip: { min: 70, max: 200 },
 	waistToHip: { min: 10, max: 35 },
+	/** Waist to knee: the handbook size 12 has 58.5 (TRADE.md, from memory); petite and tall figures
+	 * either side. The knee lies at least `belowHip` under the hip line. */
+	waistToKnee: { min: 35, max: 80, belowHip: 20 },
+	/** A waist larger than the hip by more than this is asked to be confirmed: it is rare (from memory),
+	 * and most often a slip of the tape or the keyboard. */
+	waistOverHipToConfirm: 20,
 	length: { belowHip: 5, max: 130 },
 	/** The hip may exceed the waist by at most this many cm per cm of waist-to-hip depth (a quarter of it
 	 * is 1.2 cm of shaping per cm of depth, beyond any body a skirt block is drafted for). */
 	hipOverWaistPerDepth: 4.8
 } as const;
 
-const LABEL = { waist: 'waist', hip: 'hip', length: 'skirt length', waistToHip: 'waist-to-hip depth' } as const;
+const LABEL = { waist: 'waist', hip: 'hip', length: 'skirt length', waistToHip: 'waist-to-hip depth', waistToKnee: 'waist-to-knee length' } as const;
 
 function numberProblem(field: keyof typeof LABEL, v: unknown, min: number, max: number): FieldProblem | null {
 	if (typeof v !== 'number' || !Number.isFinite(v)) {
@@ -68,6 +86,33 @@ export function validateMeasurements(input: unknown, defaultWaistToHip = 22): Fi
 			max
 		});
 	}
+	if (m.waistToKnee !== undefined && m.waistToKnee !== null) {
+		const p = numberProblem('waistToKnee', m.waistToKnee, L.waistToKnee.min, L.waistToKnee.max);
+		push(p);
+		const knee = m.waistToKnee as number;
+		if (!p && knee < depth + L.waistToKnee.belowHip) {
+			problems.push({
+				field: 'waistToKnee',
+				message: `Please check your waist-to-knee length: ${formatCm(knee)} puts your knee less than ${L.waistToKnee.belowHip} cm below your hip line (${formatCm(depth)} down).`,
+				min: Math.ceil(depth + L.waistToKnee.belowHip),
+				max: L.waistToKnee.max,
+				value: knee,
+				limit: depth + L.waistToKnee.belowHip
+			});
+		}
+	}
+	if (!problems.length && m.confirmed !== true && (m.waist as number) - (m.hip as number) > L.waistOverHipToConfirm) {
+		const limit = (m.hip as number) + L.waistOverHipToConfirm;
+		problems.push({
+			field: 'waist',
+			message: `Please check your waist and hip: a waist ${formatCm((m.waist as number) - (m.hip as number))} larger than the hip is rare. If both are right, confirm them and we draft for them.`,
+			value: m.waist as number,
+			limit,
+			max: Math.floor(limit),
+			confirmable: true
+		});
+	}
+	problems.push(...resolveFit(m.adjustments).problems);
 	const minLength = Math.ceil(depth + L.length.belowHip);
 	const lp = numberProblem('length', m.length, minLength, L.length.max);
 	if (lp && typeof m.length === 'number' && Number.isFinite(m.length) && m.length < minLength) {
@@ -82,8 +127,21 @@ export function resolveMeasurements(input: unknown, rules: HouseRules): Resolved
 	const problems = validateMeasurements(input, rules.defaultWaistToHip);
 	if (problems.length) throw new DraftInputError(problems);
 	const m = input as Measurements;
+	const fit = resolveFit(m.adjustments);
+	if (fit.problems.length) throw new DraftInputError(fit.problems);
 	const known = typeof m.waistToHip === 'number';
-	return { waist: m.waist, hip: m.hip, length: m.length, hipDepth: known ? (m.waistToHip as number) : rules.defaultWaistToHip, hipDepthAssumed: !known };
+	const kneeKnown = typeof m.waistToKnee === 'number';
+	return {
+		waist: m.waist,
+		hip: m.hip,
+		length: m.length,
+		hipDepth: known ? (m.waistToHip as number) : rules.defaultWaistToHip,
+		hipDepthAssumed: !known,
+		kneeDepth: kneeKnown ? (m.waistToKnee as number) : rules.kneeDepth,
+		kneeAssumed: !kneeKnown,
+		confirmed: m.confirmed === true,
+		fit: fit.fit
+	};
 }
 
 /** Sentences about the measurements themselves: an assumed hip depth, values near the edges of the range. */

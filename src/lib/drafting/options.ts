@@ -150,26 +150,28 @@ export function resolveChoice(input: SkirtChoiceInput | undefined, m: ResolvedMe
 	const wanted = pick('vent', c.vent, ['auto', 'vent', 'kick-pleat', 'none'] as const, 'auto');
 	let vent: ResolvedChoice['vent'] = 'none';
 	const fitted = style === 'straight' || style === 'pencil';
+	const knee = m.kneeDepth;
+	const pastKnee = m.length > knee;
+	// A pencil skirt's hem grips the legs near the knee; well above it the stride is free (common practice).
+	const pencilNeeds = style === 'pencil' && m.length > knee - rules.vent.pencilAboveKnee;
 	if (!fitted) {
 		if (wanted === 'vent' || wanted === 'kick-pleat') warnings.push('A flared skirt has room to walk in, so it has no vent.');
 	} else if (wanted === 'auto') {
-		if (!stretch && (style === 'pencil' || m.length > rules.kneeDepth)) vent = 'vent';
-	} else if (wanted === 'none' && style === 'pencil' && !stretch) {
+		if (!stretch && (pencilNeeds || pastKnee)) vent = 'vent';
+	} else if (wanted === 'none' && (pencilNeeds || pastKnee) && !stretch) {
 		vent = 'vent';
-		warnings.push('A pencil skirt needs a vent to walk in, so we added one.');
-	} else {
-		vent = wanted;
-		if (wanted === 'none' && style === 'straight' && !stretch && m.length > rules.kneeDepth) {
-			warnings.push('Your skirt passes the knee and has no vent: you may find it hard to take a full step.');
-		}
-	}
+		warnings.push(style === 'pencil' ? 'A pencil skirt needs a vent to walk in, so we added one.' : 'Your skirt passes the knee, so we added a vent to walk in.');
+	} else vent = wanted;
 	const ventRule = vent === 'kick-pleat' ? rules.kickPleat : rules.vent;
+	// The vent opens from the hem to about the knee (TRADE.md: a fitted skirt past the knee needs a vent
+	// reaching about the knee); never shorter than the house vent, never above the hip line + 5 cm.
 	const room = m.length - m.hipDepth - 5;
-	const ventLength = Math.min(ventRule.length, room);
+	const reach = pastKnee ? m.length - knee + rules.vent.reachAboveKnee : 0;
+	const ventLength = Math.min(Math.max(ventRule.length, reach), room);
 	if (vent !== 'none' && ventLength < 8) {
 		vent = 'none';
 		warnings.push('Your skirt is short enough to walk in without a vent, so it has none.');
-	} else if (vent !== 'none' && wanted === 'auto' && style === 'straight') {
+	} else if (vent !== 'none' && wanted === 'auto' && pastKnee) {
 		warnings.push(`Your skirt passes the knee, so it has a ${vent === 'vent' ? 'back vent' : 'kick pleat'} to walk in.`);
 	}
 
@@ -177,6 +179,8 @@ export function resolveChoice(input: SkirtChoiceInput | undefined, m: ResolvedMe
 	if (pockets && m.length < rules.pocket.fromWaist + rules.pocket.opening + 12) {
 		pockets = false;
 		warnings.push('Your skirt is too short for pockets in the side seams, so it has none.');
+	} else if (pockets && position === 'side') {
+		warnings.push('Your zip is in the left side seam, so your pocket goes in the right side seam only.');
 	}
 	const choice: ResolvedChoice = {
 		style,

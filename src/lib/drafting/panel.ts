@@ -4,7 +4,6 @@
 // moving the side waist point along the waist line (as a cutter takes a little off at the side).
 import {
 	P,
-	add,
 	cubic,
 	dist,
 	hermite,
@@ -12,7 +11,6 @@ import {
 	pointAt,
 	rotate,
 	segmentLength,
-	sub,
 	tangentAt,
 	unit,
 	type CubicSegment,
@@ -46,6 +44,10 @@ export interface PanelSpec {
 	darts: { intake: number; fromCentre: number; length: number }[];
 	/** The waist seam this panel must measure with its darts closed. */
 	seam: number;
+	/** Dart points stay at or above this depth (the hip line less the house clearance). */
+	pointLimit?: number;
+	/** High hip: the side curve this much further out at the high hip level (HIGH_HIP below the waist). */
+	highHip?: number;
 }
 
 /** A drafted quarter panel above the hip line (below it each style goes its own way). */
@@ -75,6 +77,71 @@ function paramAtX(s: CubicSegment, x: number): number {
 	return (lo + hi) / 2;
 }
 
+/** Where the high hip is measured: 8–10 cm below the waist (TRADE.md), or half the hip depth if less. */
+export const highHipLevel = (hipDepth: number) => Math.min(9, 0.5 * hipDepth);
+
+/** The side seam from the side waist point S into the hip point H, arriving plumb. It leaves S turned out
+ * from the straight line, so it is fullest about half way down, as the body's hip curve is (a curve that
+ * left along the straight line was fullest three quarters down). `lift` (0–1) makes it fuller higher up. */
+function sideCurve(S: Point, H: Point, lift: number): CubicSegment {
+	const shaping = Math.max(0, H.x - S.x);
+	const drop = H.y - S.y;
+	// c1 moves out and up, c2 down toward H as `lift` grows: the curve stands further out at every height
+	// (so the high-hip fullness found by bisection is monotone); c1.x never passes H.x, so the curve never
+	// bulges past the hip line.
+	return cubic(S, P(S.x + (0.8 + 0.2 * lift) * shaping, S.y + (0.4 - 0.2 * lift) * drop), P(H.x, H.y - (0.35 - 0.15 * lift) * drop), H, 'side');
+}
+
+/** x of a curve running down (y increasing along it) at height y, by bisection. */
+function xAtY(c: CubicSegment, y: number): number {
+	let lo = 0;
+	let hi = 1;
+	for (let i = 0; i < 30; i++) {
+		const m = (lo + hi) / 2;
+		if (pointAt(c, m).y < y) lo = m;
+		else hi = m;
+	}
+	return pointAt(c, (lo + hi) / 2).x;
+}
+
+/** The side curve, fuller at the high hip by `more` cm where the block allows (bisection on the lift). */
+function fittedSideCurve(S: Point, H: Point, more: number, hipDepth: number): CubicSegment {
+	const base = sideCurve(S, H, 0);
+	if (more <= 1e-9 || H.x - S.x < 1e-6) return base;
+	const y = highHipLevel(hipDepth);
+	if (y <= S.y) return base;
+	const target = xAtY(base, y) + more;
+	let lo = 0;
+	let hi = 1;
+	if (xAtY(sideCurve(S, H, 1), y) <= target) return sideCurve(S, H, 1);
+	for (let i = 0; i < 24; i++) {
+		const m = (lo + hi) / 2;
+		if (xAtY(sideCurve(S, H, m), y) < target) lo = m;
+		else hi = m;
+	}
+	return sideCurve(S, H, (lo + hi) / 2);
+}
+
+/** The waist between two points, leaving `from` along `dir`: its start handle shortened until the curve
+ * sags no more than 0.5 mm below the lower of its two ends (a waist should run on, never dip). */
+function waistRun(from: Point, dir: Point, to: Point, tTo: Point, h1: number): CubicSegment {
+	let h0 = dist(from, to) / 3;
+	let c = hermite(from, dir, to, tTo, 'waist', h0, h1);
+	for (let i = 0; i < 3 && sag(c) > 0.05; i++) {
+		h0 *= 0.6;
+		c = hermite(from, dir, to, tTo, 'waist', h0, h1);
+	}
+	return c;
+}
+
+/** How far a waist curve dips below the lower of its ends (y grows down the body). */
+function sag(c: CubicSegment): number {
+	const lower = Math.max(c.from.y, c.to.y);
+	let worst = 0;
+	for (let i = 1; i < 16; i++) worst = Math.max(worst, pointAt(c, i / 16).y - lower);
+	return worst;
+}
+
 /** Handle at the side waist point: short enough that the waist does not dip below the line it rises from. */
 function endHandle(from: Point, S: Point, tS: Point): number {
 	const chord = dist(from, S) / 3;
@@ -86,15 +153,14 @@ function endHandle(from: Point, S: Point, tS: Point): number {
 function buildAt(spec: PanelSpec, sideX: number): Panel {
 	const d = spec.hipDepth;
 	const back = spec.kind === 'back';
-	const C = back ? P(spec.centreShaping, 0) : P(0, spec.centreDrop);
-	const centreDir = back ? unit(P(-spec.centreShaping, d)) : P(0, 1);
+	const C = P(back ? spec.centreShaping : 0, spec.centreDrop);
+	const centreDir = back ? unit(P(-spec.centreShaping, d - C.y)) : P(0, 1);
 	// The waist leaves the centre line square to it, so the pair of panels meets without a point or a dip.
 	const tC = P(centreDir.y, -centreDir.x);
 	const S = P(sideX, -spec.raise);
 	const H = P(spec.hip, d);
-	const drop = d + spec.raise;
-	const shaping = Math.max(0, spec.hip - sideX);
-	const u = shaping < 1e-9 ? P(0, 1) : unit(P(shaping, drop));
+	const hipCurve = fittedSideCurve(S, H, spec.highHip ?? 0, d);
+	const u = tangentAt(hipCurve, 0);
 	// Waist and side seam meet square, so front and back join into one smooth waist at the side.
 	const tS = P(u.y, -u.x);
 	const base = hermite(C, tC, S, tS, 'waist', dist(C, S) / 3, endHandle(C, S, tS));
@@ -107,21 +173,22 @@ function buildAt(spec: PanelSpec, sideX: number): Panel {
 		const M = pointAt(base, t);
 		const tM = tangentAt(base, t);
 		const half = dart.intake / 2;
-		const point = P(M.x, M.y + dart.length);
-		const beta = Math.atan2(half, dart.length);
+		// The point never passes the clearance above the hip line, wherever the waist meets the dart.
+		const len = spec.pointLimit === undefined ? dart.length : Math.max(1, Math.min(dart.length, spec.pointLimit - M.y));
+		const point = P(M.x, M.y + len);
+		const beta = Math.atan2(half, len);
 		const top1 = P(M.x - half, M.y);
 		const top2 = P(M.x + half, M.y);
 		// Each side of the dart is turned by half its angle, so folding it shut lines the two tangents up.
 		const leftDir = rotate(tM, -beta);
 		const rightDir = rotate(tM, beta);
 		const capY = (top1.y + (leftDir.y / leftDir.x) * half + top2.y - (rightDir.y / rightDir.x) * half) / 2;
-		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: dart.length });
-		parts.push([hermite(start, startDir, top1, leftDir, 'waist')]);
+		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: len });
+		parts.push([darts.length > 1 ? waistRun(start, startDir, top1, leftDir, dist(start, top1) / 3) : hermite(start, startDir, top1, leftDir, 'waist')]);
 		start = top2;
 		startDir = rightDir;
 	}
-	parts.push([hermite(start, startDir, S, tS, 'waist', dist(start, S) / 3, endHandle(start, S, tS))]);
-	const hipCurve = cubic(S, add(S, P((u.x / u.y) * 0.4 * drop, 0.4 * drop)), sub(H, P(0, 0.35 * drop)), H, 'side');
+	parts.push([spec.darts.length ? waistRun(start, startDir, S, tS, endHandle(start, S, tS)) : hermite(start, startDir, S, tS, 'waist', dist(start, S) / 3, endHandle(start, S, tS))]);
 	const waistSeam = parts.flat().reduce((sum, s) => sum + segmentLength(s), 0);
 	return { spec, centreTop: C, centreHip: P(0, d), waistParts: parts, darts, sideTop: S, hipPoint: H, hipCurve, waistSeam };
 }

@@ -26,7 +26,8 @@ const measurements = fc
 	})
 	.map(({ waist, hipShare, waistToHip }) => {
 		const top = Math.min(200, waist + MEASUREMENT_LIMITS.hipOverWaistPerDepth * (waistToHip ?? 22));
-		return { waist, hip: 70 + hipShare * (Math.max(70, top) - 70), waistToHip };
+		// Confirmed: figures outside what a block usually fits are drafted once the shopper confirms them.
+		return { waist, hip: 70 + hipShare * (Math.max(70, top) - 70), waistToHip, confirmed: true };
 	})
 	.chain((m) => fc.double({ min: Math.ceil((m.waistToHip ?? 22) + 5), max: 130, noNaN: true }).map((length) => ({ ...m, length })));
 

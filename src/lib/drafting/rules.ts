@@ -53,6 +53,15 @@ export interface HouseRules {
 		spacing: number;
 		/** Dart points stay at least this far above the hip line. */
 		clearAboveHip: number;
+		/** The widest a dart may open at its point, in degrees: past about 25° the cloth puckers at the point
+		 * however well it is sewn (TRADE.md, common practice); a larger intake is split or lengthened. */
+		maxAngle: number;
+		/** The most darts one quarter panel carries; beyond them the side seam takes the rest. */
+		maxCount: number;
+		/** A dart grows `perCm` cm longer for each cm of intake over `from` (a larger intake, a longer dart). */
+		lengthGrowth: { from: number; perCm: number };
+		/** Share of the dart intake beyond the usual that goes to the back (the seat wants it, the front less). */
+		backShare: number;
 	};
 	side: {
 		/** The side seam keeps at least this share of a panel's suppression (small hip–waist differences). */
@@ -66,7 +75,7 @@ export interface HouseRules {
 	};
 	/** Waist-to-hip depth used when the shopper does not know hers (shown as an assumption). */
 	defaultWaistToHip: number;
-	/** Waist-to-knee depth the atelier assumes when deciding whether a skirt passes the knee. */
+	/** Waist-to-knee depth used when the shopper does not give hers (shown as an assumption). */
 	kneeDepth: number;
 	allowances: {
 		seam: number;
@@ -82,7 +91,9 @@ export interface HouseRules {
 	facingDepth: number;
 	/** Default zip lengths by kind. */
 	zip: { zip: number; 'invisible-zip': number };
-	vent: { length: number; extension: number };
+	/** A vent is at least `length` long; past the knee it reaches `reachAboveKnee` above the knee. A pencil
+	 * skirt whose hem is more than `pencilAboveKnee` above the knee needs none. */
+	vent: { length: number; extension: number; reachAboveKnee: number; pencilAboveKnee: number };
 	kickPleat: { length: number; extension: number };
 	/** Style shaping below the hip line, in cm per cm of skirt below the hip line. */
 	styles: {
@@ -93,7 +104,8 @@ export interface HouseRules {
 		/** Gored: flare added each side of every panel seam. */
 		goreFlare: number;
 	};
-	lining: { shorter: number };
+	/** The lining is `shorter` than the skirt; its centre back stays open `slitAbove` higher than a vent's top. */
+	lining: { shorter: number; slitAbove: number };
 	pocket: { fromWaist: number; opening: number; width: number };
 	fabric: {
 		/** Fabric is sold in steps of this length. */
@@ -115,27 +127,55 @@ export const DEFAULT_RULES: HouseRules = {
 	centreBackShaping: 1,
 	centreFrontDrop: 1,
 	sideRaise: 1,
-	darts: { fromCentre: { front: 12, back: 12 }, length: { front: 11, back: 14 }, maxIntake: 3.5, minIntake: 1, spacing: 3.5, clearAboveHip: 2.5 },
+	darts: {
+		fromCentre: { front: 12, back: 12 },
+		length: { front: 11, back: 14 },
+		maxIntake: 3.5,
+		minIntake: 1,
+		spacing: 3.5,
+		clearAboveHip: 2.5,
+		maxAngle: 25,
+		maxCount: 3,
+		lengthGrowth: { from: 3, perCm: 1.5 },
+		backShare: 0.6
+	},
 	side: { minShare: 0.25, maxShaping: 6, fullRaiseAt: 2, easing: 0.5 },
 	defaultWaistToHip: 22,
-	kneeDepth: 58,
+	// Handbook size 12 waist-to-knee 58.5 cm (TRADE.md, from memory).
+	kneeDepth: 58.5,
 	allowances: { seam: 1.5, zipSeam: 2, hem: 4, circleHem: 1.5, facingEdge: 1, liningHem: 3 },
 	waistband: { width: 3.5, underlap: 3.5 },
 	facingDepth: 6,
 	zip: { zip: 20, 'invisible-zip': 22 },
-	vent: { length: 20, extension: 4 },
+	vent: { length: 20, extension: 4, reachAboveKnee: 2, pencilAboveKnee: 10 },
 	kickPleat: { length: 20, extension: 6 },
 	styles: { pencilTaper: 0.065, aLineFlare: 0.15, goreFlare: 0.1 },
-	lining: { shorter: 2.5 },
+	lining: { shorter: 2.5, slitAbove: 2 },
 	pocket: { fromWaist: 5, opening: 15, width: 16 },
 	fabric: { saleStep: 10, endAllowance: 5 }
 };
 
 const INCH = 2.54;
-/** The same defaults for a shop working in inches: allowances ⅝″ (¾″ at a zip), hem 1½″, narrow hem ½″. */
+/** Rules that are not lengths (shares, rates, angles, counts): kept as they are in inches. */
+const NOT_LENGTHS = ['styles', 'side.minShare', 'darts.maxAngle', 'darts.maxCount', 'darts.backShare', 'darts.lengthGrowth.perCm', 'suppression'];
+/** A length in whole inch steps as a tape reads them: ½″ from 10 cm, ¼″ from 2 cm, ⅛″ below. */
+const inchStep = (cm: number) => {
+	const step = cm >= 10 ? 0.5 : cm >= 2 ? 0.25 : 0.125;
+	return Math.max(0.125, Math.round(cm / INCH / step) * step) * INCH;
+};
+function inInches(v: unknown, path: string): unknown {
+	if (NOT_LENGTHS.some((p) => path === p || path.startsWith(`${p}.`))) return v;
+	if (typeof v === 'number') return v === 0 ? 0 : inchStep(v);
+	if (typeof v === 'object' && v !== null) return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, inInches(x, path ? `${path}.${k}` : k)]));
+	return v;
+}
+/** The same defaults for a shop working in inches: every length a whole number of eighths (so the figures
+ * a cutter reads to ⅛″ are the lengths drafted), allowances ⅝″ (¾″ at a zip), hem 1½″, narrow hem ½″. */
 export const DEFAULT_RULES_INCH: HouseRules = {
-	...DEFAULT_RULES,
-	allowances: { seam: 0.625 * INCH, zipSeam: 0.75 * INCH, hem: 1.5 * INCH, circleHem: 0.5 * INCH, facingEdge: 0.375 * INCH, liningHem: 1.25 * INCH }
+	...(inInches(DEFAULT_RULES, '') as HouseRules),
+	allowances: { seam: 0.625 * INCH, zipSeam: 0.75 * INCH, hem: 1.5 * INCH, circleHem: 0.5 * INCH, facingEdge: 0.375 * INCH, liningHem: 1.25 * INCH },
+	// Cloth sold by the yard goes in ⅛ yard steps, 4.5″ (TRADE.md, from memory for the steps).
+	fabric: { saleStep: 4.5 * INCH, endAllowance: 2 * INCH }
 };
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -166,6 +206,11 @@ const RULE_RANGES: [string, number, number][] = [
 	['darts.minIntake', 0, 5],
 	['darts.spacing', 1, 15],
 	['darts.clearAboveHip', 0, 10],
+	['darts.maxAngle', 8, 40],
+	['darts.maxCount', 1, 4],
+	['darts.lengthGrowth.from', 0, 10],
+	['darts.lengthGrowth.perCm', 0, 5],
+	['darts.backShare', 0, 1],
 	['side.minShare', 0, 0.6],
 	['side.maxShaping', 0.5, 20],
 	['side.fullRaiseAt', 0, 10],
@@ -179,11 +224,14 @@ const RULE_RANGES: [string, number, number][] = [
 	['zip', 10, 80],
 	['vent.length', 5, 60],
 	['vent.extension', 1, 10],
+	['vent.reachAboveKnee', -5, 15],
+	['vent.pencilAboveKnee', 0, 40],
 	['kickPleat.length', 5, 60],
 	['kickPleat.extension', 1, 12],
 	['styles.pencilTaper', 0, 0.2],
 	['styles', 0, 0.6],
 	['lining.shorter', 0, 10],
+	['lining.slitAbove', 0, 10],
 	['pocket.fromWaist', 0, 20],
 	['pocket.opening', 8, 25],
 	['pocket.width', 8, 30],

@@ -24,14 +24,18 @@ import { waistWithCaps, type DartGeom, type Panel } from '../panel';
 import { backCentre, backCut, grainClearOfDarts, hemToCentre, panelNotches, type Outline, type StyleContext, type StyleResult } from './common';
 
 /** The panel with its side-most dart closed by up to `flare` cm at the hem. */
-export function closeDartIntoFlare(panel: Panel, length: number, flare: number) {
+export function closeDartIntoFlare(panel: Panel, length: number, flare: number, minIntake = 0) {
 	const k = panel.darts.length - 1;
 	if (k < 0) return { panel, opened: 0, turn: 0 };
 	const dart = panel.darts[k];
 	const pivot = dart.point;
 	const full = angleBetween(sub(dart.top2, pivot), sub(dart.top1, pivot));
 	const reach = length - pivot.y;
-	const turn = full * Math.min(1, flare / (Math.abs(full) * reach));
+	let share = Math.min(1, flare / (Math.abs(full) * reach));
+	// What is left open must be a dart worth sewing: a sliver under the house's smallest is closed too
+	// (the hem flares that little more).
+	if ((1 - share) * dart.intake < minIntake) share = 1;
+	const turn = full * share;
 	const rot = (p: Point) => rotateAbout(p, pivot, turn);
 	const last = mapSegments(panel.waistParts[k + 1], rot) as CubicSegment[];
 	const closed = Math.abs(turn - full) < 1e-12;
@@ -58,7 +62,7 @@ function aLinePanel(block: Panel, ctx: StyleContext, length: number, lining: boo
 	const flare = ctx.rules.styles.aLineFlare * below;
 	// Front and back both turn their side-most dart into flare, so the flare is shared round the body
 	// and the two side seams, equal in length, hang alike.
-	const { panel, opened, turn, pivot } = closeDartIntoFlare(block, length, flare);
+	const { panel, opened, turn, pivot } = closeDartIntoFlare(block, length, flare, ctx.rules.darts.minIntake);
 	const H = panel.hipPoint;
 	const down = rotate(P(0, 1), turn);
 	const sideFlare = Math.max(0, flare - opened);

@@ -1,6 +1,7 @@
 // What every style hands on to become pieces, and the parts most styles share: a side seam below the
 // hip line, the hem squared to the seams, the back vent, the notches a cutter snips.
 import type { Block } from '../block';
+import type { BodySide } from '../fit';
 import {
 	P,
 	add,
@@ -29,7 +30,7 @@ export interface NotchSpec {
 
 /** A marking line inside a piece (drawn pencil grey, dashed). */
 export interface MarkLine {
-	kind: 'hip-line' | 'fold-line' | 'band-fold' | 'vent-line';
+	kind: 'hip-line' | 'fold-line' | 'band-fold' | 'vent-line' | 'trim-line';
 	points: Point[];
 }
 
@@ -60,6 +61,8 @@ export interface StyleContext {
 	rules: HouseRules;
 	choice: ResolvedChoice;
 	block: Block;
+	/** Set when the wearer's left and right halves are drafted apart: which one this is. */
+	bodySide?: BodySide;
 }
 
 /** A style's own pieces (before waist finish, lining and pockets are added) and its own figures. */
@@ -120,7 +123,9 @@ export function panelNotches(kind: 'front' | 'back', side: Segment[], hipAlongSi
 	else if (back && centreZip) out.push({ at: at(centreZip, closure.length), label: 'zip' });
 	if (pockets) {
 		const p = ctx.rules.pocket;
-		out.push({ at: at(side, p.fromWaist), label: 'pocket' }, { at: at(side, p.fromWaist + p.opening), label: 'pocket' });
+		// With the zip in the left side seam, the pocket goes in the right one only.
+		const label = closure.position === 'side' ? 'pocket (right side)' : 'pocket';
+		out.push({ at: at(side, p.fromWaist), label }, { at: at(side, p.fromWaist + p.opening), label });
 	}
 	return out;
 }

@@ -21,13 +21,20 @@ export function fittedPanel(panel: Panel, ctx: StyleContext, v: Variant, taper: 
 	const kind = panel.spec.kind;
 	const d = panel.spec.hipDepth;
 	const H = panel.hipPoint;
-	const corner = sideBelowHip(H, length - d, -taper * (length - d), 1);
-	const side: Segment[] = [panel.hipCurve, line(H, corner, 'side')];
+	// The taper stops at the knee (TRADE.md): below it the side seam runs straight down.
+	const knee = Math.min(length, ctx.m.kneeDepth);
+	const kneeAt = sideBelowHip(H, knee - d, -taper * (knee - d), 1);
+	const corner = knee < length ? P(kneeAt.x, length) : kneeAt;
+	const bend = knee < length && taper > 0;
+	const side: Segment[] = [panel.hipCurve, ...(bend ? [line(H, kneeAt, 'side'), line(kneeAt, corner, 'side')] : [line(H, corner, 'side')])];
 	const centreHem = P(0, length);
-	const hem = taper > 0 ? hemToCentre(corner, unit(sub(corner, H)), centreHem) : line(corner, centreHem, 'hem');
+	const hem = taper > 0 && knee >= length ? hemToCentre(corner, unit(sub(corner, H)), centreHem) : line(corner, centreHem, 'hem');
 	const vent = kind === 'back' ? ventOf(ctx, v) : null;
 	const centre = kind === 'back' && vent ? backCentre(panel, length, vent) : [line(centreHem, panel.centreTop, 'fold')];
-	const cut = kind === 'front' ? { count: 1, onFold: true } : backCut(ctx, vent?.kind !== 'none');
+	// The lining's back is cut like the skirt's: with a centre seam wherever the skirt has a vent, so its
+	// slit can open above the vent.
+	const shellVent = ctx.choice.vent !== 'none';
+	const cut = kind === 'front' ? { count: 1, onFold: true } : backCut(ctx, v.lining ? shellVent : vent?.kind !== 'none');
 	if (kind === 'back' && cut.onFold) centre.splice(0, centre.length, line(centreHem, panel.centreTop, 'fold'));
 	const waist = waistWithCaps(panel);
 	const centreDown: Segment[] = centre.map((s) => line(s.to, s.from, s.edge)).reverse();
@@ -35,6 +42,12 @@ export function fittedPanel(panel: Panel, ctx: StyleContext, v: Variant, taper: 
 	const notes: string[] = [];
 	if (vent && vent.kind !== 'none') {
 		notes.push(vent.kind === 'vent' ? 'Vent: fold the extension back on the centre back line' : 'Kick pleat: stitch the extensions together, press to one side');
+	}
+	// A lining split above the vent, so it never holds the vent shut (TRADE.md).
+	if (kind === 'back' && v.lining && shellVent && !cut.onFold) {
+		const slitTop = Math.max(d + 2, ctx.m.length - ctx.choice.ventLength - ctx.rules.lining.slitAbove);
+		notches.push({ at: P(0, Math.min(slitTop, length - 1)), label: 'slit' });
+		notes.push('Leave the centre back seam open below the slit notch');
 	}
 	const lining = v.lining;
 	const name = `${kind === 'front' ? 'Front' : 'Back'}${lining ? ' lining' : ''}`;

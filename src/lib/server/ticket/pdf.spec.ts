@@ -41,7 +41,7 @@ function input(
 			index: 1,
 			count: 1,
 			styleName: 'Rue straight skirt',
-			measurements: { ...m },
+			measurements: { waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip },
 			options: options as Record<string, unknown>
 		},
 		fabric: FABRIC,
