@@ -107,4 +107,18 @@ describe('fit adjustments on W 72, H 100', () => {
 			]);
 		}
 	});
+
+	it('refuses a back waist lowered past two fifths of a short waist-to-hip depth, where the back outline would fold over itself', () => {
+		// W 50, H 70, depth 10, hollow back 1.8 and the left hip 4 higher crossed the back's outline (found by the
+		// property tests). The share is the house's own; a fitting in calico is the usual answer (common practice).
+		const short = { waist: 50, hip: 70, waistToHip: 10, length: 15, confirmed: true };
+		try {
+			draftSkirt({ ...short, adjustments: { hollowBack: 1.8, oneHip: { side: 'left', higher: 4 } } });
+			expect.unreachable();
+		} catch (e) {
+			expect((e as DraftInputError).fields).toEqual([expect.objectContaining({ field: 'adjustments.hollowBack', value: 5.8, limit: 4 })]);
+		}
+		const ok = draftSkirt({ ...short, adjustments: { hollowBack: 1, oneHip: { side: 'left', higher: 3 } } });
+		for (const p of ok.pieces) expect(pathProblems(p.cutting.segments)).toEqual([]);
+	});
 });

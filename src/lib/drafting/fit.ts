@@ -82,7 +82,9 @@ export function resolveFit(input: unknown): { fit: ResolvedFit; problems: FieldP
 			problems.push({ field: `adjustments.${key}`, message: `The ${WORDS[key]} must be from ${min} to ${max} cm.`, min, max, ...(typeof v === 'number' && Number.isFinite(v) ? { value: v, limit: v < min ? min : max } : {}) });
 			return 0;
 		}
-		return v;
+		// Amounts are taken to the tenth of a millimetre, finer than any tape or hand reads: a figure a
+		// hair below a limit (3.9999999 for 4) otherwise leaves a sliver of an edge that crosses itself.
+		return Math.round(v * 100) / 100;
 	};
 	const ease = isObj(input.ease) ? input.ease : {};
 	let oneHip: ResolvedFit['oneHip'] = null;

@@ -64,6 +64,9 @@ function numberProblem(field: keyof typeof LABEL, v: unknown, min: number, max: 
 	return null;
 }
 
+/** The most the back waist may be lowered by fit adjustments, as a share of the waist-to-hip depth. */
+const LOWERED_BACK_SHARE = 0.4;
+
 /** Every problem with a set of measurements (an empty list means it can be drafted). */
 export function validateMeasurements(input: unknown, defaultWaistToHip = 22): FieldProblem[] {
 	const m = (typeof input === 'object' && input !== null ? input : {}) as Record<string, unknown>;
@@ -112,7 +115,23 @@ export function validateMeasurements(input: unknown, defaultWaistToHip = 22): Fi
 			confirmable: true
 		});
 	}
-	problems.push(...resolveFit(m.adjustments).problems);
+	const fit = resolveFit(m.adjustments);
+	problems.push(...fit.problems);
+	// The hollow back and a higher hip both take the back waist down towards the hip line. Past about
+	// two fifths of the waist-to-hip depth between them, the back's darts and side curve have no room
+	// left and its outline folds over itself (found by the property tests at a 10–12 cm depth; the
+	// fraction is ours, common practice would fit such a figure in calico first).
+	const lowered = fit.fit.hollowBack + (fit.fit.oneHip?.higher ?? 0);
+	const room = Math.floor(LOWERED_BACK_SHARE * depth * 10) / 10;
+	if (!fit.problems.length && lowered > room + 1e-9) {
+		problems.push({
+			field: 'adjustments.hollowBack',
+			message: `Together the hollow back and the higher hip lower the back waist ${formatCm(lowered)}; over a ${formatCm(depth)} waist-to-hip depth a block takes at most ${formatCm(room)}. Please check them, or ask us about a fitting in calico.`,
+			value: lowered,
+			limit: room,
+			max: room
+		});
+	}
 	const minLength = Math.ceil(depth + L.length.belowHip);
 	const lp = numberProblem('length', m.length, minLength, L.length.max);
 	if (lp && typeof m.length === 'number' && Number.isFinite(m.length) && m.length < minLength) {
