@@ -6,7 +6,7 @@ import { P, type Point } from './geometry';
 import { boundsOf } from './outline';
 import { waistWithCaps, type Panel } from './panel';
 import { INK, PENCIL, CHALK, THREAD, drawPiece, esc, foldBracket, grainArrow, n, pathD, polyline, scaleBar, text } from './svg-kit';
-import { formatLength, type Units } from './units';
+import { formatBuy, formatLength, type Units } from './units';
 
 /** What to draw and in which units the figures are written. */
 export interface SvgOptions {
@@ -129,7 +129,7 @@ function layoutView(draft: Draft, units: Units, est: FabricEstimate): string {
 	if (lay.folded) s += foldBracket(P(0, lane), P(len, lane), P(0, 1), 1);
 	s += text(P(len / 2, -1), lay.folded ? 'selvedges' : 'selvedge', 0.9, { fill: PENCIL, italic: true });
 	if (!lay.folded) s += text(P(len / 2, lane + 1.2), 'selvedge', 0.9, { fill: PENCIL, italic: true });
-	s += text(P(len / 2, lane + (lay.folded ? 5.6 : 3)), `Buy ${formatLength(est.length, units)} of ${formatLength(lay.width, units)} wide fabric · lay ${formatLength(lay.layLength, units)}`, 1.1, { weight: 600 });
+	s += text(P(len / 2, lane + (lay.folded ? 5.6 : 3)), `Buy ${formatBuy(est.length, units)} of ${formatLength(lay.width, units)} wide fabric · lay ${formatLength(lay.layLength, units)}`, 1.1, { weight: 600 });
 	lay.notes.forEach((t, i) => (s += text(P(0, lane + 7.4 + i * 1.4), t, 0.85, { anchor: 'start', fill: PENCIL })));
 	return frame(s, 0, -2, len, lane + 7.4 + lay.notes.length * 1.4, `Lay on ${formatLength(lay.width, units)} fabric${lay.folded ? ', folded lengthwise' : ', opened out'}`, units);
 }
