@@ -30,7 +30,9 @@ export function layFaults(
 		const co = new ClipperLib.ClipperOffset(2, 0.25);
 		co.AddPath(
 			poly.map((q) => ({ X: Math.round(q.x * scale), Y: Math.round(q.y * scale) })),
-			ClipperLib.JoinType.jtMiter,
+			// Growing by half the spacing must be the round (Euclidean) offset: a mitre reaches further at a
+			// sharp corner and would see a clash that is not there.
+			spacing > 0 ? ClipperLib.JoinType.jtRound : ClipperLib.JoinType.jtMiter,
 			ClipperLib.EndType.etClosedPolygon
 		);
 		const res: ClipperLib.Paths = [];

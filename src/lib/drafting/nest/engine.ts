@@ -95,6 +95,10 @@ interface Lay {
 	choice: Int8Array;
 	spots: Spot[];
 	length: number;
+	/** What the climb minimises: the length, then (a hundredth as much) the area-weighted mean right edge
+	 * of the pieces, so that among lays of one length the one packed further left is preferred; that is
+	 * the one from which a later move can pull in the end. */
+	score: number;
 }
 
 /** Nests the items; throws NestInputError when a piece is wider than the strip in every way it may lie. */
@@ -164,7 +168,14 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 		const done = decode(sheet, prepared, order, choice, width, start * every, spots, (i) => {
 			if ((i + 1) % every === 0) newMarks[(i + 1) / every] = sheet.clone();
 		});
-		return { lay: done ? { order, choice, spots: done, length: sheet.length } : null, marks: newMarks };
+		if (!done) return { lay: null, marks: newMarks };
+		let edge = 0;
+		for (const sp of done) {
+			const sh = prepared[sp.item].shapes[sp.variant];
+			edge += (sp.x + sh.length) * sh.area;
+		}
+		const score = sheet.length + (0.01 * edge) / totalArea;
+		return { lay: { order, choice, spots: done, length: sheet.length, score }, marks: newMarks };
 	};
 
 	// Starting orders: the caller's, then largest area first, longest first, widest first.
@@ -192,7 +203,10 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	for (const { order, choice } of starts) {
 		if (best && (evaluations >= budget || now() > deadline)) break;
 		const { lay, marks } = run(order, choice, 0, null, null);
-		if (lay && (!best || lay.length < best.length - 1e-9)) {
+		if (
+			lay &&
+			(!best || lay.length < best.length - 1e-9 || (lay.length <= best.length + 1e-9 && lay.score < best.score))
+		) {
 			best = lay;
 			current = lay;
 			currentMarks = marks;
@@ -200,10 +214,29 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	}
 	if (!best || !current) throw new NestInputError('Some piece fits nowhere on the strip.');
 
-	// Late-acceptance hill climbing over order and ways of lying.
-	const history = new Float64Array(Math.max(5, Math.min(200, 10 * n))).fill(current.length);
+	// Late-acceptance hill climbing over order and ways of lying; when the best has not improved for a long
+	// while, start again from it with a few pieces swapped.
+	const history = new Float64Array(Math.max(5, Math.min(200, 10 * n))).fill(current.score);
+	const patience = Math.max(300, 30 * n);
+	let sinceBest = 0;
 	let step = 0;
 	while (evaluations < budget && now() < deadline && n > 1) {
+		if (sinceBest > patience) {
+			sinceBest = 0;
+			const order = best.order.slice();
+			for (let k = 0; k < 3; k++) {
+				const a = Math.floor(random() * n);
+				const b = Math.floor(random() * n);
+				[order[a], order[b]] = [order[b], order[a]];
+			}
+			const { lay, marks } = run(order, best.choice.slice(), 0, null, null);
+			if (lay) {
+				current = lay;
+				currentMarks = marks;
+				history.fill(current.score);
+			}
+			continue;
+		}
 		const order = current.order.slice();
 		const choice = current.choice.slice();
 		const r = random();
@@ -232,13 +265,20 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 		const { lay, marks } = run(order, choice, from, current, currentMarks);
 		const h = step % history.length;
 		step++;
+		sinceBest++;
 		if (!lay) continue;
-		if (lay.length <= current.length + 1e-9 || lay.length <= history[h] + 1e-9) {
+		if (lay.score <= current.score + 1e-12 || lay.score <= history[h] + 1e-12) {
 			current = lay;
 			currentMarks = marks;
 		}
-		history[h] = current.length;
-		if (current.length < best.length - 1e-9) best = current;
+		history[h] = current.score;
+		if (
+			current.length < best.length - 1e-9 ||
+			(current.length <= best.length + 1e-9 && current.score < best.score - 1e-12)
+		) {
+			if (current.length < best.length - 1e-9) sinceBest = 0;
+			best = current;
+		}
 	}
 
 	const placements: NestPlacement[] = best.spots.map((s) => {
