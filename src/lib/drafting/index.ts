@@ -32,11 +32,14 @@
  *   0.1 mm, corners mitred or trimmed, the seam mirrored below the hem line so a hem folds up flat, and
  *   any loop an offset makes inside a tight bend cut out. (A uniform polygon offset, such as Clipper's,
  *   cannot give per-edge allowances or mirrored hem corners; the tests use Clipper to cross-check.)
- * - Fabric (fabric.ts, pack.ts, columns.ts): the cutting pieces laid on the width, grain along the
- *   selvedge, folded where a piece is cut on the fold, turned end for end only without nap. Several lays
- *   are tried (rows "next fit" by height with pieces slid together, and columns of stacked pieces); each
- *   can only need less length on a wider fabric, so the shortest of them can too. The lay is grown by the
- *   shrinkage and rounded up to the sale step.
+ * - Fabric (fabric.ts, pack.ts, columns.ts, nest/): the cutting pieces laid on the width left after
+ *   shrinking, grain along the selvedge, folded where a piece is cut on the fold, turned end for end only
+ *   without nap, a gap between pieces. The nester (nest/) fits pieces into each other: outlines as bands
+ *   across the strip, bottom-left placement exact along the length, a search over order and turns. The
+ *   quote takes the best nested lay over a fixed ladder of widths, or the row and column lays if shorter;
+ *   each only shortens as the cloth widens, so the estimate does too. The lay is grown as L ÷ (1 − s) and
+ *   rounded up to the sale step (10 cm, or ⅛ yd by the yard). cutterLay searches one order for seconds;
+ *   combinedLay lays several orders of one cloth together.
  * - Drawings (drawing/, svg.ts): each drawing is described once as marks with a role (seam, cutting,
  *   construction, dart, grain, fold, notch, label, dimension, scale bar) in cm, with the words placed
  *   once (text widths supplied by the back end); svg.ts writes the block, the pieces or the lay as one
@@ -46,7 +49,8 @@
  * Draft.figures are rounded to the millimetre; Draft.exactFigures keep full precision.
  */
 export { draftSkirt, type Draft } from './draft';
-export { estimateFabric, type FabricEstimate, type FabricOptions, type Layout, type LayoutPiece } from './fabric';
+export { estimateFabric, saleLength, type FabricEstimate, type FabricOptions, type Layout, type LayoutPiece } from './fabric';
+export { combinedLay, cutterLay, type CombinedLay, type CutterLay, type LayOrder, type SearchOptions } from './nest/cutter';
 export { toSvg, type SvgOptions } from './svg';
 export { CM_PER_INCH, cmToIn, formatCm, formatInches, formatLength, inToCm, type Units } from './units';
 export { DEFAULT_RULES, DEFAULT_RULES_INCH, resolveRules, type FrontBack, type HouseRules, type HouseRulesInput, type SuppressionRule } from './rules';

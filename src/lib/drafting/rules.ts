@@ -108,10 +108,16 @@ export interface HouseRules {
 	lining: { shorter: number; slitAbove: number };
 	pocket: { fromWaist: number; opening: number; width: number };
 	fabric: {
-		/** Fabric is sold in steps of this length. */
+		/** Fabric is sold in steps of this length (cm) when sold by the metre. */
 		saleStep: number;
 		/** Added to a lay to square the cut ends of the fabric. */
 		endAllowance: number;
+		/** Sold by the metre (in `saleStep` steps) or by the yard (in ⅛ yard steps, 11.43 cm). */
+		sellBy: 'metre' | 'yard';
+		/** Least room between pieces on a lay, for the shears (cm). */
+		gap: number;
+		/** A waistband longer than every other piece may be cut in two and joined at a side seam. */
+		bandJoin: 'none' | 'side-seam';
 	};
 }
 
@@ -152,7 +158,7 @@ export const DEFAULT_RULES: HouseRules = {
 	styles: { pencilTaper: 0.065, aLineFlare: 0.15, goreFlare: 0.1 },
 	lining: { shorter: 2.5, slitAbove: 2 },
 	pocket: { fromWaist: 5, opening: 15, width: 16 },
-	fabric: { saleStep: 10, endAllowance: 5 }
+	fabric: { saleStep: 10, endAllowance: 5, sellBy: 'metre', gap: 0.5, bandJoin: 'side-seam' }
 };
 
 const INCH = 2.54;
@@ -175,7 +181,7 @@ export const DEFAULT_RULES_INCH: HouseRules = {
 	...(inInches(DEFAULT_RULES, '') as HouseRules),
 	allowances: { seam: 0.625 * INCH, zipSeam: 0.75 * INCH, hem: 1.5 * INCH, circleHem: 0.5 * INCH, facingEdge: 0.375 * INCH, liningHem: 1.25 * INCH },
 	// Cloth sold by the yard goes in ⅛ yard steps, 4.5″ (TRADE.md, from memory for the steps).
-	fabric: { saleStep: 4.5 * INCH, endAllowance: 2 * INCH }
+	fabric: { ...(inInches(DEFAULT_RULES.fabric, 'fabric') as HouseRules['fabric']), saleStep: 4.5 * INCH, endAllowance: 2 * INCH, sellBy: 'yard' }
 };
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -236,7 +242,8 @@ const RULE_RANGES: [string, number, number][] = [
 	['pocket.opening', 8, 25],
 	['pocket.width', 8, 30],
 	['fabric.saleStep', 1, 100],
-	['fabric.endAllowance', 0, 30]
+	['fabric.endAllowance', 0, 30],
+	['fabric.gap', 0, 3]
 ];
 
 /** Every numeric rule's path with its range, listed once from the defaults. */
@@ -288,6 +295,10 @@ export function resolveRules(input?: HouseRulesInput | HouseRules): HouseRules {
 			problems.push({ field: 'rules.suppression', message: 'The suppression shares must add up to 100 % over the whole body.' });
 		}
 	}
+	if (!isObject(rules.fabric) || (rules.fabric.sellBy !== 'metre' && rules.fabric.sellBy !== 'yard'))
+		problems.push({ field: 'rules.fabric.sellBy', message: 'Fabric is sold by the "metre" or by the "yard".' });
+	if (!isObject(rules.fabric) || (rules.fabric.bandJoin !== 'none' && rules.fabric.bandJoin !== 'side-seam'))
+		problems.push({ field: 'rules.fabric.bandJoin', message: 'The waistband join must be "none" or "side-seam".' });
 	if (rules.darts.minIntake > rules.darts.maxIntake) {
 		problems.push({ field: 'rules.darts.minIntake', message: 'The smallest dart must not be larger than the largest.', max: rules.darts.maxIntake });
 	}

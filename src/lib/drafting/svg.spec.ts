@@ -59,8 +59,11 @@ describe('drawings', () => {
 		expect(block).toContain('>Front 25.5 cm</text>');
 		expect(block).toContain('back mark 21.5 cm · front mark 20.5 cm');
 		const lay = toSvg(d, { view: 'layout', units: 'cm', fabric: { width: 150, nap: false, shrinkage: 0 } });
-		expect(lay).toContain('>Buy 90 cm of 150 cm wide fabric');
-		expect(lay).toContain('Lay on 150 cm fabric, folded lengthwise');
+		// Nested, the pieces go side by side across the opened cloth.
+		expect(lay).toContain('>Buy 80 cm of 150 cm wide fabric');
+		expect(lay).toContain('Lay on 150 cm fabric, opened out');
+		// In inches a length to buy is rounded up to the ⅛″, never down: 80 cm is 31.496″, so 31½″.
+		expect(toSvg(d, { view: 'layout', units: 'in', fabric: { width: 150, nap: false, shrinkage: 0 } })).toContain('>Buy 31½″ of 59″ wide fabric');
 	});
 
 	it('gives the block a grain line in each panel and keeps the hip-line words off the side seam', () => {

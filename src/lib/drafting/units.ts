@@ -36,3 +36,10 @@ export const formatLength = (cm: number, units: Units = 'cm'): string => (units 
 
 /** Rounds to the millimetre, the precision a cutter reads from a rule (and never gives −0). */
 export const toMm = (cm: number): number => Math.round(cm * 10) / 10 + 0;
+
+/** A length to buy in the shopper's units, rounded up (to the ⅛″ or the millimetre), never below the need:
+ * 150 cm is "59⅛″", not the nearer "59″". */
+export function formatBuy(cm: number, units: Units = 'cm'): string {
+	if (units === 'cm') return formatCm(Math.ceil(cm * 10 - 1e-9) / 10);
+	return formatInches(inToCm(Math.ceil(cmToIn(cm) * 8 - 1e-9) / 8));
+}

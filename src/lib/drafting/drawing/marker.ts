@@ -92,6 +92,8 @@ export function markerMarks(layout: Layout, scale: number, u: number, measure: M
 		word(L + 3 * u, 0, layout.folded ? 'fold' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' }),
 		word(L + 3 * u, H, layout.folded ? 'selvedges' : 'selvedge', { baseline: 'middle', anchor: 'start', tone: 'pencil' })
 	];
+	const placed: Pt[] = [];
+	const labelled = new Set<string>();
 	for (const p of layout.pieces) {
 		if (!p.outline.length) continue;
 		marks.push({
@@ -102,8 +104,14 @@ export function markerMarks(layout: Layout, scale: number, u: number, measure: M
 			fill: 'white',
 			dashed: p.layers === 1 && layout.folded
 		});
-		const c = p.outline.reduce((a, q) => ({ x: a.x + q.x / p.outline.length, y: a.y + q.y / p.outline.length }), { x: 0, y: 0 });
-		marks.push(word(at(c).x, at(c).y, String(numberOf(p.pieceId)), { size: 7 * u, weight: 600, baseline: 'middle' }));
+		// A small piece laid many times (pocket bags, a pieced band) would stack its number on its
+		// neighbours' at a small scale: once one copy is numbered, crowded copies go without.
+		const size = 7 * u;
+		const c = labelPoint(p.outline, placed, size);
+		if (labelled.has(p.pieceId) && placed.some((o) => Math.hypot(o.x - c.x, o.y - c.y) < 1.5 * size)) continue;
+		placed.push(c);
+		labelled.add(p.pieceId);
+		marks.push(word(at(c).x, at(c).y, String(numberOf(p.pieceId)), { size, weight: 600, baseline: 'middle' }));
 	}
 	// Grain runs along the selvedge: a double-headed arrow under the lay, then the scale and its bar.
 	const gy = H + 18 * u;
@@ -120,4 +128,48 @@ export function markerMarks(layout: Layout, scale: number, u: number, measure: M
 	marks.push(ruledBar({ x: sx + measure(ratio, small, 600) + 8 * u, y: gy - 1.6 * u }, u).mark);
 	if (needsLegend(layout)) marks.push(word(0, gy + 16 * u, 'Dashed outline: a piece needed from one layer only.', { anchor: 'start', tone: 'pencil' }));
 	return marks;
+}
+
+type Pt = { x: number; y: number };
+
+function inside(poly: Pt[], q: Pt) {
+	let c = false;
+	for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+		const [a, b] = [poly[i], poly[j]];
+		if (a.y > q.y !== b.y > q.y && q.x < ((b.x - a.x) * (q.y - a.y)) / (b.y - a.y) + a.x) c = !c;
+	}
+	return c;
+}
+
+function edgeDistance(poly: Pt[], q: Pt) {
+	let best = Infinity;
+	for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+		const [a, b] = [poly[j], poly[i]];
+		const [dx, dy] = [b.x - a.x, b.y - a.y];
+		const t = Math.max(0, Math.min(1, ((q.x - a.x) * dx + (q.y - a.y) * dy) / (dx * dx + dy * dy || 1)));
+		best = Math.min(best, Math.hypot(q.x - a.x - t * dx, q.y - a.y - t * dy));
+	}
+	return best;
+}
+
+/**
+ * Where a piece's number goes in a nested lay: the point inside the outline farthest from its edges and
+ * from the numbers already placed (pieces fitted into each other can share a middle, and a curved piece's
+ * middle can lie outside it). A grid search is enough at the size of a number on the page.
+ */
+function labelPoint(poly: Pt[], placed: Pt[], size: number): Pt {
+	const xs = poly.map((q) => q.x);
+	const ys = poly.map((q) => q.y);
+	const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+	let best: Pt = { x: (x0 + x1) / 2, y: (y0 + y1) / 2 };
+	let score = -Infinity;
+	const N = 16;
+	for (let i = 0; i <= N; i++)
+		for (let j = 0; j <= N; j++) {
+			const q = { x: x0 + ((x1 - x0) * (i + 0.5)) / (N + 1), y: y0 + ((y1 - y0) * (j + 0.5)) / (N + 1) };
+			if (!inside(poly, q)) continue;
+			const s = Math.min(edgeDistance(poly, q), ...placed.map((o) => Math.hypot(o.x - q.x, o.y - q.y) - size));
+			if (s > score) [best, score] = [q, s];
+		}
+	return best;
 }

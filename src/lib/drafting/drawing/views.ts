@@ -6,7 +6,7 @@ import { P, type Point } from '../geometry';
 import { boundsOf } from '../outline';
 import { waistWithCaps, type Panel } from '../panel';
 import { grainClearOfDarts } from '../styles/common';
-import { formatLength, type Units } from '../units';
+import { formatBuy, formatLength, type Units } from '../units';
 import { segRect, through, type Curve, type Drawing, type Mark, type Measure, type Tone } from './model';
 import { pieceMarks } from './piece';
 import { freeAlong } from './place';
@@ -142,7 +142,7 @@ export function layView(draft: Draft, units: Units, est: FabricEstimate): Drawin
 	const edge = { tone: 'pencil' as const, italic: true };
 	marks.push(text(P(len / 2, -1), lay.folded ? 'selvedges' : 'selvedge', 0.9, edge));
 	if (!lay.folded) marks.push(text(P(len / 2, lane + 1.2), 'selvedge', 0.9, edge));
-	const buy = `Buy ${formatLength(est.length, units)} of ${formatLength(lay.width, units)} wide fabric · lay ${formatLength(lay.layLength, units)}`;
+	const buy = `Buy ${formatBuy(est.length, units)} of ${formatLength(lay.width, units)} wide fabric · lay ${formatLength(lay.layLength, units)}`;
 	marks.push(text(P(len / 2, lane + (lay.folded ? 5.6 : 3)), buy, 1.1, { weight: 600 }));
 	lay.notes.forEach((t, i) => marks.push(text(P(0, lane + 7.4 + i * 1.4), t, 0.85, { anchor: 'start', tone: 'pencil' })));
 	return frame(

@@ -58,7 +58,8 @@ export function fabric(doc: Doc, t: Ticket, f: Frame, top: number, bottom: numbe
 	line(doc, `Cut ${formatMetres(e.length)}`, x, y + 12, { size: 14, weight: 600 });
 	y += 18;
 	const rules = t.draft.rules.fabric;
-	const how = `The lay is ${formatCm(e.layout.layLength)}; with ${formatCm(rules.endAllowance)} to square the ends and ${formatCm(fb.shrinkagePct).replace(' cm', '')} % for shrinkage, rounded up to the next ${formatCm(rules.saleStep)}.`;
+	const step = rules.sellBy === 'yard' ? '⅛ yard' : formatCm(rules.saleStep);
+	const how = `The lay is ${formatCm(e.layout.layLength)}; with ${formatCm(rules.endAllowance)} to square the ends, divided by (1 − ${formatCm(fb.shrinkagePct).replace(' cm', '')} %) for shrinkage, rounded up to the next ${step}.`;
 	y += para(doc, how, x, y, wl, { size: 7, color: PENCIL }) + 3;
 	const lay = e.layout.folded
 		? `Folded lengthwise, selvedges together: ${formatCm(e.layout.laneWidth)} wide, two layers.`
