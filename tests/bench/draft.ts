@@ -19,6 +19,7 @@ import {
 	type SkirtChoiceInput
 } from '../../src/lib/drafting';
 import { benchDraft } from '../../src/lib/drafting/bench';
+import { seeded } from '../../src/lib/drafting/nest/random';
 import { DEMO_FABRICS } from '../../src/lib/server/seed/catalogue';
 import { summarise } from './stats.js';
 
@@ -26,17 +27,6 @@ const SINGLE_RUNS = Number(process.env.QL_BENCH_DRAFT_RUNS ?? 2000);
 const RANDOM_FIGURES = Number(process.env.QL_BENCH_RANDOM_FIGURES ?? 10_000);
 const SEED = 0x5eed_2024;
 
-/** mulberry32: a small, well-known 32-bit PRNG; the seed fixes the whole sequence. */
-function prng(seed: number) {
-	let a = seed >>> 0;
-	return () => {
-		a = (a + 0x6d2b79f5) >>> 0;
-		let t = a;
-		t = Math.imul(t ^ (t >>> 15), t | 1);
-		t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-	};
-}
 
 type Job = { m: Measurements; choice: SkirtChoiceInput; fabric: FabricOptions };
 type Parts = { draft: number; estimate: number; svg: number; refused: boolean };
@@ -86,7 +76,7 @@ function single() {
 
 /** A random figure the engine accepts: drawn inside MEASUREMENT_LIMITS and kept only if it validates. */
 function randomJobs(n: number): { jobs: Job[]; rejected: number } {
-	const rnd = prng(SEED);
+	const rnd = seeded(SEED);
 	const between = (lo: number, hi: number) => Math.round((lo + rnd() * (hi - lo)) * 10) / 10;
 	const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rnd() * xs.length)];
 	const jobs: Job[] = [];

@@ -10,6 +10,7 @@ import { flatten, polygonArea } from './outline';
 import { packColumns } from './columns';
 import { packRows, type LayItem, type LayPlacement, type Orientation } from './pack';
 import type { Piece } from './pieces';
+import { unfolded } from './nest/pieces';
 import { ladderLay, layPiecesOf } from './nest/quote';
 import type { PieceLay } from './nest/lay';
 import type { HouseRules } from './rules';
@@ -92,27 +93,6 @@ function outlineOf(p: Piece, kind: 'cut' | 'whole' | 'halves', seam: number): Po
 	return o.cut;
 }
 
-/** The whole piece opened out from its fold: the outline from the fold round to the fold again, then its
- * mirror image in the fold line (x = 0). */
-function unfolded(poly: Point[]): Point[] {
-	const n = poly.length;
-	const on = (q: Point) => Math.abs(q.x) <= 1e-6;
-	const s = poly.findIndex((q, i) => on(q) && !on(poly[(i + 1) % n]));
-	if (s < 0) return poly;
-	const half: Point[] = [];
-	for (let k = 0; k < n; k++) {
-		const q = poly[(s + k) % n];
-		half.push(q);
-		if (k > 0 && on(q)) break;
-	}
-	return [
-		...half,
-		...half
-			.slice(1, -1)
-			.reverse()
-			.map((q) => ({ x: -q.x, y: q.y }))
-	];
-}
 
 /** The ways of lying allowed: without nap, each may also be turned end for end. */
 function withTurns(o: Orientation[], nap: boolean): Orientation[] {
