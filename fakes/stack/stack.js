@@ -69,6 +69,10 @@ export async function startStack(opts) {
 		done(db.alreadyRunning ? 'it was already running' : '');
 		const env = { ...appEnv(config, db.url), ...opts.appEnv };
 
+		// The root tsconfig extends .svelte-kit/tsconfig.json, which only `svelte-kit sync` writes. The seed
+		// (through tsx) resolves $lib with its paths, and a build into a kit folder of its own needs it too:
+		// on a fresh clone it is not there yet.
+		if (!existsSync(join(ROOT, '.svelte-kit', 'tsconfig.json'))) run('npx', ['svelte-kit', 'sync'], { quiet: true });
 		step(local ? 'Applying migrations and seeding the demo atelier (kept if already there)' : 'Migrating and seeding the database');
 		run(process.execPath, ['src/lib/server/db/migrate.js'], { env, quiet: true, hint: 'Feed the newest file in drizzle/ to the mariadb client to see the SQL error.' });
 		run(process.execPath, [TSX, 'src/lib/server/seed/run.ts'], { env, quiet: true });
@@ -77,9 +81,6 @@ export async function startStack(opts) {
 		const buildDir = local ? join(ROOT, 'build') : join(work, 'build');
 		if (!local || needsBuild()) {
 			step('Building the app');
-			// The root tsconfig extends .svelte-kit/tsconfig.json, which only `svelte-kit sync` writes:
-			// on a fresh clone the build of a system with its own kit folder would find it missing.
-			if (!existsSync(join(ROOT, '.svelte-kit', 'tsconfig.json'))) run('npx', ['svelte-kit', 'sync'], { quiet: true });
 			run('npx', ['vite', 'build', '--logLevel', local ? 'warn' : 'error'], {
 				quiet: true,
 				env: local ? {} : { QL_BUILD_DIR: buildDir, QL_KIT_DIR: join(work, 'kit') },
