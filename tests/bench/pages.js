@@ -13,11 +13,11 @@ import { gzipSync } from 'node:zlib';
 /** The routes the bench reports, with a real path for the cross-check against served HTML. */
 export const PAGE_ROUTES = [
 	'/',
-	'/styles/[slug]',
-	'/styles/[slug]/make',
+	'/styles/[slug=slug]',
+	'/styles/[slug=slug]/make',
 	'/bag',
 	'/checkout',
-	'/orders/[number]',
+	'/orders/[number=number]',
 	'/workroom',
 	'/admin',
 	'/signin/check-mail'

@@ -35,7 +35,7 @@ function draftBench() {
 		let err = '';
 		child.stdout.on('data', (c) => (out += c));
 		child.stderr.on('data', (c) => (err += c));
-		const timer = setTimeout(() => child.kill('SIGTERM'), 150_000);
+		const timer = setTimeout(() => child.kill('SIGTERM'), 400_000);
 		child.on('close', (code) => {
 			clearTimeout(timer);
 			const line = out.trim().split('\n').at(-1) ?? '';
@@ -90,7 +90,7 @@ async function main() {
 		const htmlCheck = {};
 		for (const [route, path] of [
 			['/', '/'],
-			['/styles/[slug]/make', '/styles/rue-straight/make']
+			['/styles/[slug=slug]/make', '/styles/rue-straight/make']
 		]) {
 			const r = p.routes[route];
 			if (!r || 'missing' in r) continue;

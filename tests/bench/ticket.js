@@ -13,7 +13,7 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { summarise } from './stats.js';
 import { woffToSfnt } from '../../src/lib/server/fonts/woff.js';
 
-export const TICKET_ROUTE = '/workroom/orders/[id]/ticket.pdf';
+export const TICKET_ROUTE = '/workroom/orders/[id=id]/ticket.pdf';
 
 /** Signs in through Auth.js's credentials endpoint (as tests/support/session.ts does); returns the cookie. */
 export async function signInCookie(/** @type {string} */ appUrl, /** @type {string} */ email) {

@@ -30,7 +30,7 @@ export function benchDraft(runs = 400): BenchResult {
 	let k = 0;
 	for (let waist = 55; waist <= 190; waist += 15) {
 		for (let hip = 75; hip <= 195; hip += 20) {
-			const m = { waist, hip, length: 70, waistToHip: 21 };
+			const m = { waist, hip, length: 70, waistToHip: 21, confirmed: true };
 			if (validateMeasurements(m).length) continue;
 			const style = STYLES[k++ % STYLES.length].id;
 			const d = draftSkirt(m, { style });
