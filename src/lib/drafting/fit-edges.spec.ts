@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { draftSkirt, type Measurements, type SkirtChoiceInput } from './index';
+
+// Figures at the edges of the fit adjustments, each one a counterexample the property tests
+// (fit-properties.spec.ts) once found. The waist seam check is the house rule W/4 + 0.5 + personal ease / 4
+// (common practice: the waist seam with the darts closed is a quarter of the waist plus the ease).
+
+const straight = (waistband: 'band' | 'facing'): SkirtChoiceInput => ({ style: 'straight', waistband, closure: { kind: 'zip', position: 'centre-back' }, lining: false, pockets: false, vent: 'auto', stretch: false });
+const seams = (m: Measurements) => {
+	const d = draftSkirt(m, straight('band'));
+	return [d.exactFigures, ...(d.left ? [d.left.exactFigures] : [])].flatMap((f) => [f.check.waistSeam.front, f.check.waistSeam.back]);
+};
+
+describe('a small waist with one hip much higher', () => {
+	it('W 50, H 98.07, depth 15.88, left hip 4 cm higher, waist ease −0.5: every waist seam is W/4 + 0.5 − 0.49/4', () => {
+		const m = { waist: 50, hip: 98.07, waistToHip: 15.88, length: 21, confirmed: true, adjustments: { oneHip: { side: 'left' as const, higher: 3.995, fuller: 0 }, ease: { waist: -0.495, hip: 0 } } };
+		// The ease is taken to the tenth of a millimetre: −0.495 → −0.49.
+		for (const s of seams(m)) expect(s).toBeCloseTo(50 / 4 + 0.5 - 0.49 / 4, 6);
+	});
+
+	it('W 50, H 145.5, left hip 4 cm higher: every waist seam is W/4 + 0.5', () => {
+		const m = { waist: 50, hip: 145.47532113603629, length: 27, confirmed: true, adjustments: { oneHip: { side: 'left' as const, higher: 3.995, fuller: 0 } } };
+		for (const s of seams(m)) expect(s).toBeCloseTo(50 / 4 + 0.5, 6);
+	});
+
+	it('W 50, H 122, depth 15, left hip 4 cm higher, waist ease −2: every waist seam is W/4 + 0.5 − 0.5', () => {
+		const m = { waist: 50, hip: 122, waistToHip: 15, length: 25, confirmed: true, adjustments: { oneHip: { side: 'left' as const, higher: 4, fuller: 0 }, ease: { waist: -2, hip: 0 } } };
+		for (const s of seams(m)) expect(s).toBeCloseTo(50 / 4, 6);
+	});
+});
