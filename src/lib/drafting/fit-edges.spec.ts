@@ -28,3 +28,11 @@ describe('a small waist with one hip much higher', () => {
 		for (const s of seams(m)) expect(s).toBeCloseTo(50 / 4, 6);
 	});
 });
+
+describe('the smallest waist and hip over a short depth', () => {
+	it('W 50, H 70, depth 10.93, A-line with a side zip: both waist seams are W/4 + 0.5 = 13', () => {
+		const d = draftSkirt({ waist: 50, hip: 70, waistToHip: 10.929049968259498, length: 49.44, confirmed: true }, { style: 'a-line', waistband: 'band', closure: { kind: 'zip', position: 'side' }, vent: 'vent' });
+		expect(d.exactFigures.check.waistSeam.front).toBeCloseTo(13, 6);
+		expect(d.exactFigures.check.waistSeam.back).toBeCloseTo(13, 6);
+	});
+});
