@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { draftSkirt, type Measurements, type SkirtChoiceInput } from './index';
+import { draftSkirt, pathProblems, type Measurements, type SkirtChoiceInput } from './index';
 
 // Figures at the edges of the fit adjustments, each one a counterexample the property tests
 // (fit-properties.spec.ts) once found. The waist seam check is the house rule W/4 + 0.5 + personal ease / 4
@@ -34,5 +34,13 @@ describe('the smallest waist and hip over a short depth', () => {
 		const d = draftSkirt({ waist: 50, hip: 70, waistToHip: 10.929049968259498, length: 49.44, confirmed: true }, { style: 'a-line', waistband: 'band', closure: { kind: 'zip', position: 'side' }, vent: 'vent' });
 		expect(d.exactFigures.check.waistSeam.front).toBeCloseTo(13, 6);
 		expect(d.exactFigures.check.waistSeam.back).toBeCloseTo(13, 6);
+	});
+});
+
+describe('cutting lines round a waist that rises steeply after the last dart', () => {
+	it('W 50.8, H 122, depth 14.83, high hip 8, left hip 4 higher: every cutting line is closed and never crosses itself', () => {
+		const m = { waist: 50.77762828912761, hip: 121.95602027951247, waistToHip: 14.828831664663538, waistToKnee: 59.83, length: 122, confirmed: true, adjustments: { highHip: 8, oneHip: { side: 'left' as const, higher: 4, fuller: 0 } } };
+		const d = draftSkirt(m, { ...straight('band'), closure: { kind: 'invisible-zip', position: 'centre-back' }, vent: 'kick-pleat' });
+		for (const p of d.pieces) expect(pathProblems(p.cutting.segments), p.id).toEqual([]);
 	});
 });

@@ -53,7 +53,9 @@ const apart = (a: ControlBox, b: ControlBox) => b.x0 > a.x1 + 1e-9 || b.x1 < a.x
 export function removeLoops(input: Segment[]): Segment[] {
 	const segs = [...input];
 	let boxes = segs.map(controlBox);
-	const WINDOW = 12;
+	// An offset round a bend tighter than its allowance comes in up to 32 pieces a segment: a loop spanning a
+	// dart cap and such a run (a waist rising steeply after the last dart) ran past a window of 12.
+	const WINDOW = 40;
 	for (let i = 0; i < segs.length; i++) {
 		for (let k = 1; k <= WINDOW && k < segs.length - 1; k++) {
 			const j = (i + k) % segs.length;
