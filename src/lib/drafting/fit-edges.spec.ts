@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { inside, toOutline } from './checks';
+import { flatten } from './outline';
 import { draftSkirt, pathProblems, type Measurements, type SkirtChoiceInput } from './index';
 
 // Figures at the edges of the fit adjustments, each one a counterexample the property tests
@@ -42,5 +44,25 @@ describe('cutting lines round a waist that rises steeply after the last dart', (
 		const m = { waist: 50.77762828912761, hip: 121.95602027951247, waistToHip: 14.828831664663538, waistToKnee: 59.83, length: 122, confirmed: true, adjustments: { highHip: 8, oneHip: { side: 'left' as const, higher: 4, fuller: 0 } } };
 		const d = draftSkirt(m, { ...straight('band'), closure: { kind: 'invisible-zip', position: 'centre-back' }, vent: 'kick-pleat' });
 		for (const p of d.pieces) expect(pathProblems(p.cutting.segments), p.id).toEqual([]);
+	});
+});
+
+describe('a small gored skirt', () => {
+	it('W 50, H 97.2, depth 10, length 16: every seam line lies inside its cutting line (no part taken for a loop)', () => {
+		const d = draftSkirt({ waist: 50, hip: 97.17013121755906, waistToHip: 10, length: 16, confirmed: true }, { style: 'gored', waistband: 'band', closure: { kind: 'zip', position: 'side' } });
+		for (const p of d.pieces) {
+			const cut = flatten(p.cutting.segments, 2);
+			expect(flatten(p.seam.segments, 0.5).filter((q) => !inside(q, cut) && toOutline(q, cut) > 1e-6).length, p.id).toBe(0);
+		}
+	});
+});
+
+describe('darts held short by the hip line', () => {
+	it('W 88.9, H 136.9, depth 10, hollow back 3: no dart opens wider than 25° (TRADE.md "Darts", common practice)', () => {
+		const m = { waist: 88.93829494245485, hip: 136.9382949424549, waistToHip: 10, waistToKnee: 42.58, length: 47.58, confirmed: true, adjustments: { hollowBack: 3 } };
+		const f = draftSkirt(m, { style: 'full-circle', waistband: 'facing', closure: { kind: 'zip', position: 'centre-back' }, stretch: true }).exactFigures;
+		for (const d of [...f.front.darts, ...f.back.darts]) expect((2 * Math.atan(d.intake / 2 / d.length) * 180) / Math.PI).toBeLessThanOrEqual(25 + 1e-9);
+		// The side seam takes what the shortened dart cannot: the hip line and the waist seam are kept.
+		expect(f.check.waistSeam.back).toBeCloseTo(88.93829494245485 / 4 + 0.5, 6);
 	});
 });

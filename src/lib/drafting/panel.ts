@@ -48,6 +48,8 @@ export interface PanelSpec {
 	pointLimit?: number;
 	/** High hip: the side curve this much further out at the high hip level (HIGH_HIP below the waist). */
 	highHip?: number;
+	/** The widest angle at a dart's point (degrees): a dart held short by `pointLimit` takes no more. */
+	maxAngle?: number;
 }
 
 /** A drafted quarter panel above the hip line (below it each style goes its own way). */
@@ -188,9 +190,13 @@ function buildAt(spec: PanelSpec, sideX: number): Panel {
 		const t = paramAtX(base, C.x + dart.fromCentre * share);
 		const M = pointAt(base, t);
 		const tM = tangentAt(base, t);
-		const half = dart.intake / 2;
 		// The point never passes the clearance above the hip line, wherever the waist meets the dart.
 		const len = spec.pointLimit === undefined ? dart.length : Math.max(1, Math.min(dart.length, spec.pointLimit - M.y));
+		// Where the waist dips lower than the plan allowed for (a slanted centre back under a hollow back on a
+		// short depth), the dart is held shorter than planned: it then takes no more than the largest angle
+		// allows and the side seam takes the rest (found by the property tests: 25.5° at depth 10).
+		const intake = spec.maxAngle === undefined ? dart.intake : Math.min(dart.intake, 2 * len * Math.tan((spec.maxAngle * Math.PI) / 360));
+		const half = intake / 2;
 		const point = P(M.x, M.y + len);
 		const beta = Math.atan2(half, len);
 		const top1 = P(M.x - half, M.y);
@@ -199,7 +205,7 @@ function buildAt(spec: PanelSpec, sideX: number): Panel {
 		const leftDir = rotate(tM, -beta);
 		const rightDir = rotate(tM, beta);
 		const capY = (top1.y + (leftDir.y / leftDir.x) * half + top2.y - (rightDir.y / rightDir.x) * half) / 2;
-		darts.push({ top1, top2, point, cap: P(M.x, capY), intake: dart.intake, length: len });
+		darts.push({ top1, top2, point, cap: P(M.x, capY), intake, length: len });
 		parts.push([darts.length > 1 ? waistRun(start, startDir, top1, leftDir, dist(start, top1) / 3) : hermite(start, startDir, top1, leftDir, 'waist')]);
 		start = top2;
 		startDir = rightDir;
