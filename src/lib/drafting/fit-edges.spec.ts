@@ -66,3 +66,16 @@ describe('darts held short by the hip line', () => {
 		expect(f.check.waistSeam.back).toBeCloseTo(88.93829494245485 / 4 + 0.5, 6);
 	});
 });
+
+describe('a facing on a waist that bends tightly once the darts are closed', () => {
+	const facing = { ...straight('facing'), closure: { kind: 'zip' as const, position: 'side' as const } };
+	it('W 103.9, H 157.6, depth 11.18, prominent seat 3: the back facing’s cutting line never crosses itself', () => {
+		const m = { waist: 103.93417211482267, hip: 157.60398746637514, waistToHip: 11.181211531573474, waistToKnee: 39.86, length: 61.76, confirmed: true, adjustments: { prominentSeat: 3 } };
+		for (const p of draftSkirt(m, { ...facing, pockets: true, vent: 'kick-pleat' }).pieces) expect(pathProblems(p.cutting.segments), p.id).toEqual([]);
+	});
+
+	it('W 85.5, H 132.2, depth 11.9, left hip 3.9 fuller: the full back facing’s cutting line never crosses itself', () => {
+		const m = { waist: 85.46293776517196, hip: 132.20946551010525, waistToHip: 11.902210075776411, length: 17, confirmed: true, adjustments: { oneHip: { side: 'left' as const, higher: 0, fuller: 3.925 } } };
+		for (const p of draftSkirt(m, facing).pieces) expect(pathProblems(p.cutting.segments), p.id).toEqual([]);
+	});
+});
