@@ -79,3 +79,11 @@ describe('a facing on a waist that bends tightly once the darts are closed', () 
 		for (const p of draftSkirt(m, facing).pieces) expect(pathProblems(p.cutting.segments), p.id).toEqual([]);
 	});
 });
+
+describe('a full facing joined from two halves drafted apart', () => {
+	it('W 50, H 115.4, depth 13.63, rounded abdomen 3, right hip 8 fuller: the full front facing is a closed outline', () => {
+		const m = { waist: 50.0000000000001, hip: 115.43045291103999, waistToHip: 13.631344356466656, waistToKnee: 47.01, length: 111.16, confirmed: true, adjustments: { roundedAbdomen: 3, oneHip: { side: 'right' as const, higher: 0, fuller: 8 } } };
+		const d = draftSkirt(m, { style: 'pencil', waistband: 'facing', closure: { kind: 'invisible-zip', position: 'centre-back' }, lining: true, pockets: true, stretch: true });
+		for (const p of d.pieces) expect([...pathProblems(p.seam.segments), ...pathProblems(p.cutting.segments)], p.id).toEqual([]);
+	});
+});
