@@ -55,7 +55,8 @@ function specOf(plan: PanelPlan, m: ResolvedMeasurements, rules: HouseRules): Pa
 		darts: plan.darts.map((intake, i) => ({ intake, fromCentre: at[i], length: plan.dartLength })),
 		seam: plan.seam,
 		highHip: m.fit.highHip / 4,
-		pointLimit: m.hipDepth - rules.darts.clearAboveHip
+		pointLimit: m.hipDepth - rules.darts.clearAboveHip,
+		maxAngle: rules.darts.maxAngle
 	};
 }
 
@@ -160,7 +161,7 @@ export interface Figures {
 
 function panelFigures(p: Panel): PanelFigures {
 	const darts: DartFigure[] = p.darts.map((d) => ({ fromCentre: (d.top1.x + d.top2.x) / 2 - p.centreTop.x, intake: d.intake, length: d.length }));
-	const waistWidth = (p.spec.kind === 'back' ? p.spec.centreShaping : 0) + p.spec.darts.reduce((s, d) => s + d.intake, 0) + p.waistSeam;
+	const waistWidth = (p.spec.kind === 'back' ? p.spec.centreShaping : 0) + p.darts.reduce((s, d) => s + d.intake, 0) + p.waistSeam;
 	const side = p.spec.hip - waistWidth;
 	// Rounding noise of a straight-hanging panel is no shaping at all (never a flare of 1e-15 cm).
 	return { hipWidth: p.spec.hip, waistWidth, sideShaping: Math.abs(side) < 1e-9 ? 0 : side, sideRaise: p.spec.raise, darts };
