@@ -1,3 +1,4 @@
+import { isApi } from '../access';
 import type { Handle, HandleServerError } from '@sveltejs/kit';
 
 const unavailablePage = () =>
@@ -33,7 +34,7 @@ export const unavailable: Handle = async ({ event, resolve }) => {
 	} catch (err) {
 		// The user lookup in the hooks runs before any page: the database being away shows up here.
 		if (isDatabaseDown(err)) {
-			const api = event.url.pathname.startsWith('/api/');
+			const api = isApi(event.route.id);
 			return new Response(api ? JSON.stringify({ message: UNAVAILABLE_MESSAGE }) : unavailablePage(), {
 				status: 503,
 				headers: { 'content-type': api ? 'application/json' : 'text/html; charset=utf-8', 'retry-after': '5' }
