@@ -15,6 +15,11 @@ import {
 } from 'drizzle-orm/mysql-core';
 import { sql } from 'drizzle-orm';
 import { ORDER_STAGES } from '../../orders/stages';
+import type { FitAdjustments } from '../../drafting/fit';
+
+/** Where a set of figures came from (issue: a way in without a tape measure). */
+export const FIGURE_SOURCES = ['measured', 'size_chart', 'flat_garment'] as const;
+export type FigureSource = (typeof FIGURE_SOURCES)[number];
 
 // Money is integer minor units (cents); lengths are decimal centimetres with one fixed decimal
 // (a millimetre), never floats: the same figures must come back out that went in.
@@ -133,6 +138,12 @@ export const measurementProfiles = mysqlTable(
 		hip: cm('hip_cm', 5).notNull(),
 		length: cm('length_cm', 5).notNull(),
 		waistToHip: cm('waist_to_hip_cm', 5),
+		// Optional: the vent, the taper and "past the knee" are drafted from it (house default otherwise).
+		waistToKnee: cm('waist_to_knee_cm', 5),
+		// Fit adjustments beyond the four girths (hollow back, rounded abdomen, ...), each in cm.
+		adjustments: json('adjustments').$type<FitAdjustments>(),
+		// Where the figures came from: her own tape, a published size chart, or a skirt that fits her laid flat.
+		source: mysqlEnum('figures_source', FIGURE_SOURCES).notNull().default('measured'),
 		units: mysqlEnum('units', ['cm', 'in']).notNull().default('cm'),
 		consentAt: timestamp('consent_at', { fsp: 3 }).notNull(),
 		createdAt: created(),
@@ -276,6 +287,9 @@ export const orderLines = mysqlTable(
 		options: json('options').$type<Record<string, unknown>>().notNull(),
 		// What the shopper gave, in cm, exactly as drafted; the figures are the engine's output for them.
 		measurements: json('measurements').$type<Record<string, number | null>>().notNull(),
+		// The fit adjustments drafted into this line, snapshotted like the measurements.
+		adjustments: json('adjustments').$type<FitAdjustments>(),
+		figuresSource: mysqlEnum('figures_source', FIGURE_SOURCES).notNull().default('measured'),
 		figures: json('figures').$type<Record<string, unknown>>().notNull(),
 		fabricCm: cm('fabric_cm', 6).notNull(),
 		pricing: json('pricing').$type<Record<string, number>>().notNull(),
