@@ -1,7 +1,7 @@
 import { db } from '$lib/server/db';
-import { listStyles } from '$lib/server/catalogue';
-import { currentRules } from '$lib/server/shop/rules';
-import { sampleDrawing } from '$lib/server/shop/sample';
+import { listStyles } from '$lib/server/catalogue/listing';
+import { currentRules } from '$lib/server/house/rules';
+import { sampleDrawing } from '$lib/server/quote/sample';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async () => {

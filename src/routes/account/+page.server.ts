@@ -2,7 +2,7 @@ import { fail } from '@sveltejs/kit';
 import { and, desc, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { measurementProfiles, orders } from '$lib/server/db/schema';
-import { deleteMeasurements } from '$lib/server/shop/personal-data';
+import { deleteMeasurements } from '$lib/server/account/personal-data';
 import type { Actions, PageServerLoad } from './$types';
 import { requireRole, SIGNED_IN } from '$lib/server/access';
 

@@ -1,7 +1,7 @@
 import { redirect } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { readBag, writeBag } from '$lib/server/shop/bag';
-import { viewBag } from '$lib/server/shop/bag-view';
+import { readBag, writeBag } from '$lib/server/quote/bag';
+import { viewBag } from '$lib/server/quote/bag-view';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ cookies }) => ({ bag: await viewBag(db, readBag(cookies)) });

@@ -5,11 +5,11 @@ import { env } from '$env/dynamic/private';
 import { checkoutFormSchema } from '$lib/forms/checkout';
 import { db } from '$lib/server/db';
 import { deliverQueued } from '$lib/server/mail';
-import { orderLink } from '$lib/server/orders/link';
-import { stripe } from '$lib/server/payments/stripe';
-import { clearBag, readBag } from '$lib/server/shop/bag';
-import { viewBag } from '$lib/server/shop/bag-view';
-import { orderByCheckoutKey, placeOrder, startPayment } from '$lib/server/shop/checkout';
+import { orderLink } from '$lib/server/order/link';
+import { stripe } from '$lib/server/order/payments/stripe';
+import { clearBag, readBag } from '$lib/server/quote/bag';
+import { viewBag } from '$lib/server/quote/bag-view';
+import { orderByCheckoutKey, placeOrder, startPayment } from '$lib/server/order/place';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ cookies, locals }) => {

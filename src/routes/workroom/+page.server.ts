@@ -1,7 +1,7 @@
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { lowStockFabrics, overdueCount, stageCounts } from '$lib/server/stats';
-import { workQueue } from '$lib/server/workroom/queue';
+import { lowStockFabrics, overdueCount, stageCounts } from '$lib/server/order/stats';
+import { workQueue } from '$lib/server/order/queue';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

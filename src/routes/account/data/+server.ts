@@ -1,5 +1,5 @@
 import { db } from '$lib/server/db';
-import { exportPersonalData } from '$lib/server/shop/personal-data';
+import { exportPersonalData } from '$lib/server/account/personal-data';
 import type { RequestHandler } from './$types';
 import { requireRole, SIGNED_IN } from '$lib/server/access';
 

@@ -3,9 +3,9 @@ import { eq } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
 import { db } from '$lib/server/db';
 import { orders } from '$lib/server/db/schema';
-import { orderForShopper } from '$lib/server/orders/view';
-import { stripe } from '$lib/server/payments/stripe';
-import { startPayment } from '$lib/server/shop/checkout';
+import { orderForShopper } from '$lib/server/order/view';
+import { stripe } from '$lib/server/order/payments/stripe';
+import { startPayment } from '$lib/server/order/place';
 import type { Actions, PageServerLoad } from './$types';
 
 const NOT_FOUND = 'We could not find that order. Open it from the link in your e-mail, or sign in to the account you ordered with.';

@@ -1,8 +1,8 @@
 import { error } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { listFabrics, styleBySlug } from '$lib/server/catalogue';
-import { currentRules } from '$lib/server/shop/rules';
-import { sampleDrawing } from '$lib/server/shop/sample';
+import { listFabrics, styleBySlug } from '$lib/server/catalogue/listing';
+import { currentRules } from '$lib/server/house/rules';
+import { sampleDrawing } from '$lib/server/quote/sample';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ params }) => {

@@ -5,9 +5,9 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { bagItemFrom, makeFormSchema } from '$lib/forms/make';
 import { db } from '$lib/server/db';
 import { measurementProfiles } from '$lib/server/db/schema';
-import { listFabrics, styleBySlug } from '$lib/server/catalogue';
-import { MAX_ITEMS, readBag, writeBag } from '$lib/server/shop/bag';
-import { quoteSkirt } from '$lib/server/shop/quote';
+import { listFabrics, styleBySlug } from '$lib/server/catalogue/listing';
+import { MAX_ITEMS, readBag, writeBag } from '$lib/server/quote/bag';
+import { quoteSkirt } from '$lib/server/quote/quote';
 import { DEFAULT_RULES } from '$lib/drafting';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -1,11 +1,11 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '../../drafting';
-import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
-import { OPEN_WORK_STAGES } from '../../orders/stages';
-import { priceLine, promisedShipDate, shippingCost } from '../../pricing';
-import { currentRules, shopSettingsOf } from './rules';
+import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '$lib/drafting';
+import type { MeasurementsCm, ShopOptions } from '$lib/forms/quote';
+import { OPEN_WORK_STAGES } from '$lib/orders/stages';
+import { priceLine, promisedShipDate, shippingCost } from '$lib/pricing';
+import { currentRules, shopSettingsOf } from '../house/rules';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in' };
 

@@ -4,12 +4,12 @@ import type { Db } from '../db/client';
 import { fabrics, orderLines } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { shippedMail } from '../mail/templates';
-import { moveOrder, MoveRefused, type Actor } from '../orders/stage';
-import { orderSummary } from '../orders/summary';
-import { closeOpenSessions } from '../payments/sessions';
-import { stripe } from '../payments/stripe';
-import type { OrderStage } from '../../orders/stages';
-import { formatMetres } from '../../format';
+import { moveOrder, MoveRefused, type Actor } from './stage';
+import { orderSummary } from './summary';
+import { closeOpenSessions } from './payments/sessions';
+import { stripe } from './payments/stripe';
+import type { OrderStage } from '$lib/orders/stages';
+import { formatMetres } from '$lib/format';
 
 export type StageRequest = {
 	orderId: number;

@@ -1,4 +1,4 @@
-import { DEFAULT_RULES, type HouseRules } from '../../drafting/rules';
+import { DEFAULT_RULES, type HouseRules } from '$lib/drafting/rules';
 
 /** The house rules the owner edits, by dotted path, with a label and a word of explanation each. */
 export const RULE_FIELDS = [

@@ -1,8 +1,8 @@
 import { eq, inArray, max } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { houseRules, shopSettings } from '../db/schema';
-import { resolveRules, type HouseRules } from '../../drafting/rules';
-import { DEFAULT_SHIPPING, type ShippingRule } from '../../pricing';
+import { resolveRules, type HouseRules } from '$lib/drafting/rules';
+import { DEFAULT_SHIPPING, type ShippingRule } from '$lib/pricing';
 
 // Versions never change once written, so each is parsed and checked once per process; only the
 // newest version's id is read on every call, so a saved change counts at once on every app server.

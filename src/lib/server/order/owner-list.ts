@@ -2,7 +2,7 @@ import { and, asc, count, desc, eq, gte, like, lt, or, sql, type SQL } from 'dri
 import { z } from 'zod';
 import type { Db } from '../db/client';
 import { orders } from '../db/schema';
-import { ORDER_STAGES } from '../../orders/stages';
+import { ORDER_STAGES } from '$lib/orders/stages';
 
 const SORTS = { placed: orders.createdAt, promised: orders.promisedDate, total: orders.total, number: orders.id } as const;
 

@@ -1,8 +1,8 @@
 import type { Db } from '../db/client';
-import type { BagItem } from '../../forms/quote';
-import { shippingCost } from '../../pricing';
+import type { BagItem } from '$lib/forms/quote';
+import { shippingCost } from '$lib/pricing';
 import { quoteSkirt } from './quote';
-import { shopSettingsOf } from './rules';
+import { shopSettingsOf } from '../house/rules';
 
 /** The bag as the shopper sees it, every line priced again from the database. */
 export async function viewBag(db: Db, items: BagItem[]) {

@@ -3,8 +3,8 @@
 // re-drawn by sharp as a WebP of at most 800 × 800 (which also drops EXIF data such as GPS).
 import sharp from 'sharp';
 import { eq } from 'drizzle-orm';
-import { db } from './db';
-import { uploads } from './db/schema';
+import { db } from '../db';
+import { uploads } from '../db/schema';
 import { deleteUpload, saveUpload } from './storage';
 
 export const SWATCH_LIMITS = {

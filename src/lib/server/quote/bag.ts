@@ -1,6 +1,6 @@
 import type { Cookies } from '@sveltejs/kit';
 import { z } from 'zod';
-import { bagItemSchema, type BagItem } from '../../forms/quote';
+import { bagItemSchema, type BagItem } from '$lib/forms/quote';
 import { servedOverHttps } from '../origin';
 
 // The bag lives in the shopper's own browser as an httpOnly cookie: nothing is stored for her on the

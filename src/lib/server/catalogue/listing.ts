@@ -1,6 +1,6 @@
 import { asc, eq, isNull } from 'drizzle-orm';
-import type { Db } from './db/client';
-import { fabrics, styles } from './db/schema';
+import type { Db } from '../db/client';
+import { fabrics, styles } from '../db/schema';
 
 export function listStyles(db: Db) {
 	return db.select().from(styles).where(isNull(styles.retiredAt)).orderBy(asc(styles.sortOrder), asc(styles.name));

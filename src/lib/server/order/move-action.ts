@@ -1,5 +1,5 @@
 import { fail, type RequestEvent } from '@sveltejs/kit';
-import { stageSchema } from '../../forms/stage';
+import { stageSchema } from '$lib/forms/stage';
 import type { Role } from '../db/schema';
 import { requireRole } from '../access';
 import { db } from '../db';

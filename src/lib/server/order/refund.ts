@@ -2,8 +2,8 @@ import { and, desc, eq, inArray } from 'drizzle-orm';
 import Stripe from 'stripe';
 import type { Db } from '../db/client';
 import { orderEvents, orders, payments } from '../db/schema';
-import { formatMoney } from '../../format';
-import type { Actor } from '../orders/stage';
+import { formatMoney } from '$lib/format';
+import type { Actor } from './stage';
 
 export type RefundResult = { ok: true; repeated: boolean; message: string } | { ok: false; message: string };
 

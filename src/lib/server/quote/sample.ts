@@ -1,5 +1,5 @@
-import { draftSkirt, toSvg, type StyleId } from '../../drafting';
-import type { HouseRules } from '../../drafting/rules';
+import { draftSkirt, toSvg, type StyleId } from '$lib/drafting';
+import type { HouseRules } from '$lib/drafting/rules';
 
 // The figure every style is drawn on in the catalogue: the handbook size 12 (waist 68, hip 94,
 // waist to hip 20.6 cm) at a knee length of 60 cm.

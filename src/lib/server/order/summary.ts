@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderLines, orders, styles } from '../db/schema';
-import { formatDate, formatMoney } from '../../format';
+import { formatDate, formatMoney } from '$lib/format';
 import { orderLink } from './link';
 import type { Tx } from './stage';
 

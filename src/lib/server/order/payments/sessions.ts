@@ -1,8 +1,8 @@
 import { eq } from 'drizzle-orm';
 import Stripe from 'stripe';
-import { fabrics, orderLines, orders, payments } from '../db/schema';
-import { orderToken } from '../orders/link';
-import type { Tx } from '../orders/stage';
+import { fabrics, orderLines, orders, payments } from '$lib/server/db/schema';
+import { orderToken } from '../link';
+import type { Tx } from '../stage';
 
 type OrderRow = typeof orders.$inferSelect;
 

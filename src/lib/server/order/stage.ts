@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { orderEvents, orders } from '../db/schema';
-import { canMove, STAGE_LABELS, type OrderStage } from '../../orders/stages';
+import { canMove, STAGE_LABELS, type OrderStage } from '$lib/orders/stages';
 
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 export type Actor = { id: string | null; label: string };

@@ -4,13 +4,13 @@ import type { Db } from '../db/client';
 import { orderEvents, orderLines, orders, type ShippingAddress } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { orderReceivedMail } from '../mail/templates';
-import { orderSummary } from '../orders/summary';
-import { openSession, type Opened } from '../payments/sessions';
-import type { BagItem } from '../../forms/quote';
-import { formatMetres } from '../../format';
-import { shippingCost } from '../../pricing';
-import { quoteSkirt, type QuoteProblem } from './quote';
-import { shopSettingsOf } from './rules';
+import { orderSummary } from './summary';
+import { openSession, type Opened } from './payments/sessions';
+import type { BagItem } from '$lib/forms/quote';
+import { formatMetres } from '$lib/format';
+import { shippingCost } from '$lib/pricing';
+import { quoteSkirt, type QuoteProblem } from '../quote/quote';
+import { shopSettingsOf } from '../house/rules';
 
 export type Shopper = { email: string; name: string; address: ShippingAddress; userId: string | null; checkoutKey?: string | null };
 

@@ -1,7 +1,7 @@
 import { and, asc, count, isNull, lt, min, sql } from 'drizzle-orm';
-import type { Db } from './db/client';
-import { fabrics, orders } from './db/schema';
-import { ORDER_STAGES, type OrderStage } from '../orders/stages';
+import type { Db } from '../db/client';
+import { fabrics, orders } from '../db/schema';
+import { ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
 
 /** Orders per stage with the age of the oldest one, from one grouped query. */
 export async function stageCounts(db: Db) {

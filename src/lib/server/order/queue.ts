@@ -1,7 +1,7 @@
 import { asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderLines, orders, styles } from '../db/schema';
-import type { OrderStage } from '../../orders/stages';
+import type { OrderStage } from '$lib/orders/stages';
 
 export type QueueRow = {
 	id: number;

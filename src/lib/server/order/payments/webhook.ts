@@ -1,13 +1,13 @@
 import { and, eq, ne, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
-import type { Db } from '../db/client';
-import { orderEvents, orders, payments, webhookEvents } from '../db/schema';
-import { enqueueMail } from '../mail/outbox';
-import { paymentConfirmedMail, refundMail } from '../mail/templates';
-import type { Tx } from '../orders/stage';
-import { orderSummary } from '../orders/summary';
-import { formatMoney } from '../../format';
-import { STAGE_LABELS } from '../../orders/stages';
+import type { Db } from '$lib/server/db/client';
+import { orderEvents, orders, payments, webhookEvents } from '$lib/server/db/schema';
+import { enqueueMail } from '$lib/server/mail/outbox';
+import { paymentConfirmedMail, refundMail } from '$lib/server/mail/templates';
+import type { Tx } from '../stage';
+import { orderSummary } from '../summary';
+import { formatMoney } from '$lib/format';
+import { STAGE_LABELS } from '$lib/orders/stages';
 
 const PROVIDER = { id: null, label: 'Payment provider' };
 type OrderRow = typeof orders.$inferSelect;

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { ORDER_STAGES, type OrderStage } from '../../orders/stages';
+import { ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
 
 type Rows<T> = [T[], unknown];
 
