@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
+import { OPEN_WORK_STAGES, ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
 
 type Rows<T> = [T[], unknown];
 
@@ -10,7 +10,7 @@ export async function pipelineBoard(db: Db) {
 		SELECT o.status AS stage,
 		       COUNT(*) AS n,
 		       MAX(DATEDIFF(CURRENT_DATE(), DATE(COALESCE(e.entered, o.created_at)))) AS oldestDays,
-		       SUM(o.promised_date < CURRENT_DATE() AND o.status IN ('paid','cutting','sewn','finished')) AS overdue
+		       SUM(o.promised_date < CURRENT_DATE() AND o.status IN (${sql.join(OPEN_WORK_STAGES.map((s) => sql`${s}`), sql`, `)})) AS overdue
 		FROM \`order\` o
 		LEFT JOIN (SELECT order_id, to_status, MAX(created_at) AS entered FROM order_event WHERE kind = 'stage' GROUP BY order_id, to_status) e
 		       ON e.order_id = o.id AND e.to_status = o.status

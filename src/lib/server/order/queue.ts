@@ -1,3 +1,4 @@
+import { firstName } from '$lib/orders/names';
 import { asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderLines, orders, styles } from '../db/schema';
@@ -39,7 +40,7 @@ export async function workQueue(db: Db, stages: OrderStage[] = ['paid']): Promis
 	for (const r of rows) {
 		let row = byId.get(r.id);
 		if (!row) {
-			row = { id: r.id, number: r.number, status: r.status, promisedDate: r.promisedDate, daysLeft: Number(r.daysLeft), firstName: r.name.split(/\s+/)[0], lines: [] };
+			row = { id: r.id, number: r.number, status: r.status, promisedDate: r.promisedDate, daysLeft: Number(r.daysLeft), firstName: firstName(r.name), lines: [] };
 			byId.set(r.id, row);
 		}
 		row.lines.push({ style: r.style, fabricId: r.fabricId, fabric: r.fabric, colour: r.colour, fabricCm: r.fabricCm });

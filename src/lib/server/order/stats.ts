@@ -1,7 +1,7 @@
-import { and, asc, count, isNull, lt, min, sql } from 'drizzle-orm';
+import { and, asc, count, inArray, isNull, lt, min, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders } from '../db/schema';
-import { ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
+import { OPEN_WORK_STAGES, ORDER_STAGES, type OrderStage } from '$lib/orders/stages';
 
 /** Orders per stage with the age of the oldest one, from one grouped query. */
 export async function stageCounts(db: Db) {
@@ -32,6 +32,6 @@ export async function overdueCount(db: Db) {
 	const [row] = await db
 		.select({ n: count() })
 		.from(orders)
-		.where(and(sql`${orders.status} IN ('paid','cutting','sewn','finished')`, lt(orders.promisedDate, sql`CURRENT_DATE()`)));
+		.where(and(inArray(orders.status, [...OPEN_WORK_STAGES]), lt(orders.promisedDate, sql`CURRENT_DATE()`)));
 	return row.n;
 }

@@ -1,3 +1,4 @@
+import { firstName } from '$lib/orders/names';
 import { asc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderEvents, orderLines, orders, payments, styles } from '../db/schema';
@@ -32,12 +33,12 @@ export async function orderForWorkroom(db: Db, id: number) {
 	if (!order) return null;
 	const [lines, events] = await Promise.all([linesOf(db, id), eventsOf(db, id)]);
 	const { shopperName, ...rest } = order;
-	const firstName = shopperName.split(/\s+/)[0];
+	const first = firstName(shopperName);
 	return {
-		order: { ...rest, firstName },
+		order: { ...rest, firstName: first },
 		lines: lines.map(({ lineTotal: _price, ...l }) => l),
 		// The shopper's own steps (placing the order) name her as the workroom knows her.
-		events: events.map((e) => (e.actorLabel === shopperName ? { ...e, actorLabel: firstName } : e))
+		events: events.map((e) => (e.actorLabel === shopperName ? { ...e, actorLabel: first } : e))
 	};
 }
 

@@ -4,7 +4,7 @@ import type { Db } from '$lib/server/db/client';
 import { orderEvents, orders, payments, webhookEvents } from '$lib/server/db/schema';
 import { enqueueMail } from '$lib/server/mail/outbox';
 import { paymentConfirmedMail, refundMail } from '$lib/server/mail/templates';
-import type { Tx } from '../stage';
+import { moveLocked, type Tx } from '../stage';
 import { orderSummary } from '../summary';
 import { formatMoney } from '$lib/format';
 import { STAGE_LABELS } from '$lib/orders/stages';
@@ -77,8 +77,7 @@ async function sessionPaid(tx: Tx, stripe: Stripe, session: Stripe.Checkout.Sess
 	if (order.status !== 'awaiting_payment') return refundLatePayment(tx, stripe, order, payment, session);
 	const intent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
 	await tx.update(payments).set({ state: 'paid', paymentIntentId: intent }).where(eq(payments.id, payment.id));
-	await tx.update(orders).set({ status: 'paid', paidAt: new Date() }).where(eq(orders.id, order.id));
-	await tx.insert(orderEvents).values({ orderId: order.id, actorLabel: PROVIDER.label, kind: 'stage', fromStatus: 'awaiting_payment', toStatus: 'paid', note: `Paid ${formatMoney(payment.amount, payment.currency)}` });
+	await moveLocked(tx, order, { to: 'paid', by: 'provider', actor: PROVIDER, set: { paidAt: new Date() }, note: `Paid ${formatMoney(payment.amount, payment.currency)}` });
 	const summary = await orderSummary(tx, { ...order, status: 'paid' });
 	return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...paymentConfirmedMail(summary) })];
 }
@@ -133,15 +132,13 @@ async function chargeRefunded(tx: Tx, charge: Stripe.Charge) {
 	const full = charge.amount_refunded >= payment.amount;
 	await tx.update(payments).set({ refundedAmount: charge.amount_refunded, state: full ? 'refunded' : 'partially_refunded' }).where(eq(payments.id, payment.id));
 	const newly = charge.amount_refunded - payment.refundedAmount;
-	await tx.update(orders).set({ refundedTotal: charge.amount_refunded, ...(full ? { status: 'refunded' as const } : {}) }).where(eq(orders.id, order.id));
-	await tx.insert(orderEvents).values({
-		orderId: order.id,
-		actorLabel: PROVIDER.label,
-		kind: full ? 'stage' : 'refund',
-		fromStatus: full ? order.status : null,
-		toStatus: full ? 'refunded' : null,
-		note: `Refunded ${formatMoney(newly, payment.currency)}${full ? ' (in full)' : ''}`
-	});
+	const note = `Refunded ${formatMoney(newly, payment.currency)}${full ? ' (in full)' : ''}`;
+	if (full && order.status !== 'refunded') {
+		await moveLocked(tx, order, { to: 'refunded', by: 'provider', actor: PROVIDER, set: { refundedTotal: charge.amount_refunded }, note });
+	} else {
+		await tx.update(orders).set({ refundedTotal: charge.amount_refunded }).where(eq(orders.id, order.id));
+		await tx.insert(orderEvents).values({ orderId: order.id, actorLabel: PROVIDER.label, kind: 'refund', note });
+	}
 	const summary = await orderSummary(tx, order);
 	return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...refundMail({ ...summary, refunded: formatMoney(newly, payment.currency) }) })];
 }
