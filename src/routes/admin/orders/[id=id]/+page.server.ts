@@ -1,7 +1,7 @@
 import { error, fail } from '@sveltejs/kit';
 import { z } from 'zod';
 import { db } from '$lib/server/db';
-import { orderEvents } from '$lib/server/db/schema';
+import { addNote } from '$lib/server/order/stage';
 import { requestRefund } from '$lib/server/order/refund';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { moveFromForm } from '$lib/server/order/move-action';
@@ -30,7 +30,7 @@ export const actions: Actions = {
 		const note = String((await event.request.formData()).get('note') ?? '').trim();
 		if (!note) return fail(400, { message: 'Write the note first.' });
 		if (note.length > 2000) return fail(400, { message: 'Keep a note under 2000 characters.' });
-		await db.insert(orderEvents).values({ orderId: Number(params.id), actorId: user.id, actorLabel: user.name, kind: 'note', note });
+		await addNote(db, Number(params.id), { id: user.id, label: user.name }, note);
 		return { message: 'Note added.' };
 	},
 	refund: async (event) => {
