@@ -2,7 +2,7 @@
 // a status a client can act on, a sentence for a person, and the fields it is about. Endpoints answer
 // `{ message, fields? }` with the status; pages show the message beside the fields.
 
-export type FailureStatus = 400 | 401 | 403 | 404 | 409 | 422 | 429 | 502 | 503;
+export type FailureStatus = 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 502 | 503;
 
 export interface Failure {
 	ok: false;
