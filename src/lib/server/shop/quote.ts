@@ -3,13 +3,18 @@ import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
 import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '../../drafting';
 import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
+import { confirmAsk, type ConfirmAsk } from '../../forms/confirm';
+import { inUnits } from '../../forms/units';
 import { OPEN_WORK_STAGES } from '../../orders/stages';
 import { priceLine, promisedShipDate, shippingCost } from '../../pricing';
 import { currentRules, shopSettingsOf } from './rules';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in' };
 
-export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: Record<string, string[]> };
+/** A refusal; `confirm` when the figure is one she may confirm ("did you mean …?"). */
+export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: Record<string, string[]>; confirm?: ConfirmAsk };
+
+const refuse = (problem: QuoteProblem) => ({ ok: false as const, problem });
 
 /**
  * Drafts, estimates and prices one skirt from the database's current styles, fabrics and house
@@ -24,9 +29,9 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		shopSettingsOf(db),
 		db.select({ waiting: count() }).from(orders).where(inArray(orders.status, [...OPEN_WORK_STAGES]))
 	]);
-	if (!style) return { ok: false as const, problem: { status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } } satisfies QuoteProblem };
+	if (!style) return refuse({ status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } });
 	if (input.fabricId !== undefined && !fabric) {
-		return { ok: false as const, problem: { status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } } satisfies QuoteProblem };
+		return refuse({ status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } });
 	}
 
 	let draft;
@@ -34,9 +39,14 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		draft = draftSkirt(input.measurements, { style: style.kind as StyleId, ...input.options, stretch: fabric?.stretch ?? false }, rules);
 	} catch (err) {
 		if (err instanceof DraftInputError) {
+			// The engine writes in cm; she reads her own units.
 			const fields: Record<string, string[]> = {};
-			for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(f.message);
-			return { ok: false as const, problem: { status: 400, message: err.message, fields } satisfies QuoteProblem };
+			for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(inUnits(f.message, input.units));
+			const m = input.measurements;
+			const typed = (cm: number) => (input.units === 'in' ? Math.round((cm / 2.54) * 8) / 8 : cm);
+			const confirm = confirmAsk(err.fields, { waist: typed(m.waist), hip: typed(m.hip) }, m, input.units) ?? undefined;
+			const message = err.fields.map((f) => inUnits(f.message, input.units)).join(' ');
+			return refuse({ status: 400, message, fields, ...(confirm ? { confirm } : {}) });
 		}
 		throw err;
 	}

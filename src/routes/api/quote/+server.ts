@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { fieldErrors } from '$lib/forms/errors';
 import { quoteSchema, toCm } from '$lib/forms/quote';
 import { db } from '$lib/server/db';
-import { quoteSkirt } from '$lib/server/shop/quote';
+import { quoteSkirt, type QuoteProblem } from '$lib/server/shop/quote';
 import type { RequestHandler } from './$types';
 
 // Anyone may ask for a quote. Every refusal is a 400 with field errors, never a 500: the body is
@@ -19,6 +19,9 @@ export const POST: RequestHandler = async ({ request }) => {
 	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
 	const q = parsed.data;
 	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units });
-	if (!result.ok) return json({ message: result.problem.message, fields: result.problem.fields ?? {} }, { status: result.problem.status === 404 ? 400 : result.problem.status });
+	if (!result.ok) {
+		const { message, fields, confirm } = result.problem as QuoteProblem;
+		return json({ message, fields: fields ?? {}, ...(confirm ? { confirm } : {}) }, { status: result.problem.status === 404 ? 400 : result.problem.status });
+	}
 	return json(result.quote);
 };
