@@ -286,7 +286,8 @@ export const orderLines = mysqlTable(
 			.references(() => fabrics.id),
 		options: json('options').$type<Record<string, unknown>>().notNull(),
 		// What the shopper gave, in cm, exactly as drafted; the figures are the engine's output for them.
-		measurements: json('measurements').$type<Record<string, number | null>>().notNull(),
+		// `waistToKnee` (null when not given) and `confirmed: true` for a figure the shopper confirmed.
+		measurements: json('measurements').$type<Record<string, number | boolean | null>>().notNull(),
 		// The fit adjustments drafted into this line, snapshotted like the measurements.
 		adjustments: json('adjustments').$type<FitAdjustments>(),
 		figuresSource: mysqlEnum('figures_source', FIGURE_SOURCES).notNull().default('measured'),

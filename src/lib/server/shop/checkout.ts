@@ -9,6 +9,7 @@ import { openSession, type Opened } from '../payments/sessions';
 import type { BagItem } from '../../forms/quote';
 import { formatMetres } from '../../format';
 import { shippingCost } from '../../pricing';
+import { lineSnapshot } from '../../orders/line';
 import { quoteSkirt, type QuoteProblem } from './quote';
 import { shopSettingsOf } from './rules';
 
@@ -95,13 +96,16 @@ async function insertOrder(db: Db, quoted: Quoted[], shopper: Shopper, money: { 
 		await tx.update(orders).set({ number }).where(eq(orders.id, id));
 		for (const q of quoted) {
 			const p = q.quote.price!;
+			// The knee, the confirmation and the adjustments go with the girths, as drafted (orders/line.ts).
+			const snap = lineSnapshot(q.item.measurements);
 			await tx.insert(orderLines).values({
 				orderId: id,
 				styleId: q.style.id,
 				fabricId: q.fabric!.id,
 				// Stretch comes from the cloth; kept with the order so a reprinted ticket drafts the same vent.
 				options: { style: q.style.kind, ...q.item.options, stretch: q.fabric!.stretch },
-				measurements: { ...q.item.measurements, waistToHip: q.item.measurements.waistToHip ?? null },
+				measurements: snap.measurements,
+				adjustments: snap.adjustments,
 				figures: q.draft.figures as unknown as Record<string, unknown>,
 				fabricCm: q.quote.fabric!.lengthCm,
 				pricing: { fabric: p.fabric, making: p.making, options: p.options, total: p.fabric + p.making + p.options },

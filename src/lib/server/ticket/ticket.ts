@@ -1,17 +1,18 @@
 // What one cutting ticket shows, built from an order line by re-drafting it: the stored measurements
 // and options, drafted with the house rules the order was placed under, so a reprint never changes.
 // Body measurements are personal data (GDPR): the ticket carries the shopper's first name only and
-// just the four measurements the workroom drafts from.
+// just the measurements and fit adjustments the workroom drafts from.
 import {
 	draftSkirt,
 	estimateFabric,
 	type Draft,
 	type FabricEstimate,
 	type HouseRules,
+	type FitAdjustments,
 	type HouseRulesInput,
-	type Measurements,
 	type SkirtChoiceInput
 } from '../../drafting';
+import { lineMeasurements } from '../../orders/line';
 import type { OrderStage } from '../../orders/stages';
 
 /** The cloth as the workroom has it on the shelf. */
@@ -25,12 +26,15 @@ export interface TicketFabric {
 	shrinkagePct: number;
 }
 
-/** The measurements as the shopper gave them (cm); a missing waist-to-hip depth stays null. */
+/** The measurements as the shopper gave them (cm); a missing depth or knee stays null. */
 export interface GivenMeasurements {
 	waist: number;
 	hip: number;
 	length: number;
 	waistToHip: number | null;
+	waistToKnee: number | null;
+	/** She confirmed a figure outside what a block usually fits. */
+	confirmed: boolean;
 }
 
 /** Everything one ticket (one order line) prints. */
@@ -70,7 +74,9 @@ export interface TicketInput {
 		index: number;
 		count: number;
 		styleName: string;
-		measurements: Record<string, number | null | undefined>;
+		measurements: Record<string, unknown>;
+		/** The fit adjustments snapshotted on the line (null for none). */
+		adjustments?: FitAdjustments | null;
 		options: Record<string, unknown>;
 		figures?: unknown;
 		fabricCm?: number | null;
@@ -100,18 +106,15 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 
 /** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
 export function makeTicket(input: TicketInput): Ticket {
-	const m = input.line.measurements;
+	// The one way from a stored line to the engine's input (the knee, the confirmation, the adjustments).
+	const measurements = lineMeasurements(input.line.measurements, input.line.adjustments);
 	const given: GivenMeasurements = {
-		waist: Number(m.waist),
-		hip: Number(m.hip),
-		length: Number(m.length),
-		waistToHip: typeof m.waistToHip === 'number' ? m.waistToHip : null
-	};
-	const measurements: Measurements = {
-		waist: given.waist,
-		hip: given.hip,
-		length: given.length,
-		...(given.waistToHip === null ? {} : { waistToHip: given.waistToHip })
+		waist: measurements.waist,
+		hip: measurements.hip,
+		length: measurements.length,
+		waistToHip: measurements.waistToHip ?? null,
+		waistToKnee: measurements.waistToKnee ?? null,
+		confirmed: measurements.confirmed === true
 	};
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
 	const options = { stretch: input.fabric.stretch, ...input.line.options } as SkirtChoiceInput;
