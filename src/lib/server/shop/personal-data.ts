@@ -15,7 +15,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 	return {
 		exportedAt: new Date().toISOString(),
 		account: user,
-		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
+		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, waistToKneeCm: c.waistToKnee, fitAdjustmentsCm: c.adjustments, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
 		orders: myOrders.map((o) => ({
 			number: o.number,
 			stage: o.status,
@@ -23,7 +23,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 			total: o.total,
 			currency: o.currency,
 			shippingAddress: o.shippingAddress,
-			skirts: lines.filter((l) => l.orderId === o.id).map((l) => ({ options: l.options, measurementsCm: l.measurements, draftedFigures: l.figures }))
+			skirts: lines.filter((l) => l.orderId === o.id).map((l) => ({ options: l.options, measurementsCm: l.measurements, fitAdjustmentsCm: l.adjustments, draftedFigures: l.figures }))
 		}))
 	};
 }
@@ -34,7 +34,7 @@ export async function deleteMeasurements(db: Db, userId: string) {
 		const [{ affectedRows: cards }] = await tx.delete(measurementProfiles).where(eq(measurementProfiles.userId, userId));
 		const mine = await tx.select({ id: orders.id, status: orders.status }).from(orders).where(eq(orders.userId, userId));
 		const done = mine.filter((o) => (DONE as readonly string[]).includes(o.status)).map((o) => o.id);
-		if (done.length) await tx.update(orderLines).set({ measurements: {}, figures: {} }).where(and(inArray(orderLines.orderId, done)));
+		if (done.length) await tx.update(orderLines).set({ measurements: {}, adjustments: null, figures: {} }).where(and(inArray(orderLines.orderId, done)));
 		return { cards, cleared: done.length, kept: mine.length - done.length };
 	});
 }
