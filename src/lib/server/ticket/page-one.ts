@@ -92,7 +92,7 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 			'Waist to hip',
 			g.waistToHip === null ? `not given: ${formatCm(t.draft.measurements.hipDepth)} used` : formatCm(g.waistToHip)
 		],
-		['Waist to knee', g.waistToKnee === null ? kneeWords(t.draft) : formatCm(g.waistToKnee)],
+		['Waist to knee', g.waistToKnee === null || g.waistToKnee === undefined ? kneeWords(t.draft) : formatCm(g.waistToKnee)],
 		['Skirt length', formatCm(g.length)]
 	];
 	y = pairs(doc, rows, x, w, y);
