@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { DraftInputError, draftSkirt, resolveRules, toSvg } from '$lib/drafting';
-import { rulesFromForm } from '$lib/server/house/rules-form';
+import { ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
 import { currentRules } from '$lib/server/house/rules';
 import { SAMPLE_FIGURE } from '$lib/server/quote/sample';
@@ -13,7 +13,10 @@ export const POST: RequestHandler = async (event) => {
 	const body = await event.request.json().catch(() => null);
 	if (!body || typeof body !== 'object') return json({ message: 'Send the rules as JSON.' }, { status: 400 });
 	try {
-		const rules = resolveRules(rulesFromForm(body as Record<string, unknown>, (await currentRules(db)).rules));
+		const posted = rulesFromForm(body as Record<string, unknown>, (await currentRules(db)).rules);
+		const whole = ruleFormProblems(posted);
+		if (Object.keys(whole).length) return json({ message: Object.values(whole).join(' '), fields: Object.fromEntries(Object.entries(whole).map(([k, v]) => [k, [v]])) }, { status: 400 });
+		const rules = resolveRules(posted);
 		const draft = draftSkirt(SAMPLE_FIGURE, { style: 'straight' }, rules);
 		return json({ svg: toSvg(draft, { view: 'block', units: 'cm' }), figures: draft.figures, warnings: draft.warnings });
 	} catch (err) {
