@@ -84,12 +84,13 @@ function clothDefs(d: Drawing, id: string): { defs: string; fill: string | null 
 
 /** A drawing model as a self-contained SVG, 1 unit = 1 cm. `id` names the cloth pattern, unique on a page
  * that shows several drawings; `size: false` leaves out the printed size (a garment view is not to scale). */
-export function drawingToSvg(d: Drawing, o: { id?: string; size?: boolean } = {}): string {
+export function drawingToSvg(d: Drawing, o: { id?: string; size?: boolean; px?: number } = {}): string {
 	const { x, y, w, h } = d.box;
 	const id = `cloth-${(o.id ?? 'd').replace(/[^A-Za-z0-9_-]/g, '')}`;
 	const cloth = clothDefs(d, id);
 	const ctx: Ctx = { pen: d.penScale ?? 1, cloth: cloth.fill };
-	const size = o.size === false ? '' : ` width="${n(w)}cm" height="${n(h)}cm"`;
+	// `px` sizes it in pixels for a rasteriser (an image in a mail).
+	const size = o.px ? ` width="${Math.round(o.px)}" height="${Math.round((o.px * h) / w)}"` : o.size === false ? '' : ` width="${n(w)}cm" height="${n(h)}cm"`;
 	const data = Object.entries(d.data ?? {})
 		.map(([k, v]) => ` data-${k.replace(/[^a-z0-9-]/g, '')}="${esc(typeof v === 'number' ? n(v) : v)}"`)
 		.join('');

@@ -94,6 +94,8 @@ export interface GarmentOptions {
 	units?: Units;
 	/** Words on the drawing ("Front", "Back", "knee"); left out on the smallest drawings. */
 	labels?: boolean;
+	/** Frame the skirt only (waist to below the hem or knee) rather than the whole figure: small drawings. */
+	crop?: boolean;
 }
 
 /** Calico, the cloth a toile is made in: the skirt before she chooses hers. */
@@ -346,8 +348,8 @@ export function garmentView(draft: Draft, options: GarmentOptions = {}): Drawing
 	const figure = figureOutline(g, m.waist, m.hip);
 	const figureHalf = Math.max(...figure.flatMap((c) => [c.from.x, c.to.x]));
 	const half = Math.max(figureHalf, g.hipWidth / 2, g.hemWidth / 2 + 1.5) + 4;
-	const top = Math.min(...figure.flatMap((c) => [c.from.y, c.to.y])) - 3;
-	const bottom = g.floor + (labels ? 8 : 2);
+	let top = Math.min(...figure.flatMap((c) => [c.from.y, c.to.y])) - 3;
+	let bottom = g.floor + (labels ? 8 : 2);
 	const gap = 4;
 	const marks: Mark[] = [];
 	views.forEach((view, i) => {
@@ -363,9 +365,20 @@ export function garmentView(draft: Draft, options: GarmentOptions = {}): Drawing
 		marks.push({ kind: 'group', name: `skirt, ${view}`, marks: inView.map((mk) => shiftMark(mk, dx)) });
 	});
 	const width = views.length * 2 * half + (views.length - 1) * gap;
+	let box = { x: 0, w: width };
+	if (options.crop) {
+		const y0 = -g.band - 5;
+		const y1 = Math.max(g.length, g.knee) + 6;
+		const w0 = Math.max(g.hipWidth, g.hemWidth) / 2 + 3;
+		// As wide as the skirt and no narrower than four fifths of its height, centred on the first view.
+		const cw = Math.max(2 * w0, 0.8 * (y1 - y0));
+		top = y0;
+		bottom = y1;
+		box = { x: half - cw / 2, w: cw };
+	}
 	return {
 		title: `Your skirt${views.length === 1 ? `, ${views[0]}` : ', front and back'}`,
-		box: { x: 0, y: top, w: width, h: bottom - top },
+		box: { x: box.x, y: top, w: box.w, h: bottom - top },
 		marks,
 		penScale: 3.2,
 		cloth: { colour: cloth.colour, image: cloth.image ?? null, tile: 14 },

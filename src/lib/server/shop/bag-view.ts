@@ -3,15 +3,16 @@ import type { BagItem } from '../../forms/quote';
 import { shippingCost } from '../../pricing';
 import { quoteSkirt } from './quote';
 import { shopSettingsOf } from './rules';
+import { clothOf, garmentSvg } from '../outputs/garment';
 
 /** The bag as the shopper sees it, every line priced again from the database. */
 export async function viewBag(db: Db, items: BagItem[]) {
 	const lines = [];
 	for (const item of items) {
-		const q = await quoteSkirt(db, item, { drawing: true });
+		const q = await quoteSkirt(db, item);
 		lines.push(
 			q.ok
-				? { id: item.id, ok: true as const, style: q.quote.style.name, fabric: q.quote.fabric, price: q.quote.price, warnings: q.quote.warnings, drawing: q.quote.drawing, measurements: item.measurements, units: item.units, options: item.options, shipBy: q.quote.shipBy }
+				? { id: item.id, ok: true as const, style: q.quote.style.name, fabric: q.quote.fabric, price: q.quote.price, warnings: q.quote.warnings, drawing: q.fabric ? garmentSvg(q.draft, clothOf(q.fabric), `bag-${item.id}`, item.units) : null, measurements: item.measurements, units: item.units, options: item.options, shipBy: q.quote.shipBy }
 				: { id: item.id, ok: false as const, message: q.problem.message }
 		);
 	}

@@ -36,7 +36,7 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 	if (items.length === 0) return { ok: false as const, problem: { status: 400, message: 'Your bag is empty.' } satisfies QuoteProblem };
 	const quoted: Quoted[] = [];
 	for (const item of items) {
-		const q = await quoteSkirt(db, { measurements: item.measurements, style: item.style, options: item.options, fabricId: item.fabricId, units: item.units }, { drawing: false });
+		const q = await quoteSkirt(db, { measurements: item.measurements, style: item.style, options: item.options, fabricId: item.fabricId, units: item.units });
 		if (!q.ok) return q;
 		quoted.push({ item, ...q });
 	}

@@ -1,7 +1,7 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '../../drafting';
+import { DraftInputError, draftSkirt, estimateFabric, type StyleId } from '../../drafting';
 import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
 import { OPEN_WORK_STAGES } from '../../orders/stages';
 import { priceLine, promisedShipDate, shippingCost } from '../../pricing';
@@ -14,8 +14,10 @@ export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: 
 /**
  * Drafts, estimates and prices one skirt from the database's current styles, fabrics and house
  * rules. The quote API, the bag and the checkout all call this, so the shopper sees the price she pays.
+ * It draws nothing: the configure page drafts and draws in the browser, and the pages that show a
+ * skirt draw it from `draft` themselves.
  */
-export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: boolean; now?: Date } = {}) {
+export async function quoteSkirt(db: Db, input: QuoteInput, opts: { now?: Date } = {}) {
 	// One round trip: the lookups go out together.
 	const [[style], [fabric], { id: rulesId, rules }, settings, [{ waiting }]] = await Promise.all([
 		db.select().from(styles).where(and(eq(styles.slug, input.style), isNull(styles.retiredAt))).limit(1),
@@ -55,7 +57,6 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 			figures: draft.figures,
 			warnings: draft.warnings,
 			pieces: draft.pieces.map((p) => ({ name: p.name, cut: p.cut })),
-			drawing: opts.drawing === false ? null : toSvg(draft, { view: 'pieces', units: input.units }),
 			fabric: fabric && estimate ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: estimate.length, inStock: fabric.stockCm >= estimate.length } : null,
 			price: price && shipping !== null ? { ...price, shipping, total: price.total + shipping, currency: settings.currency } : null,
 			shipBy: promisedShipDate(opts.now ?? new Date(), style.leadDays, waiting, settings.ordersPerDay)

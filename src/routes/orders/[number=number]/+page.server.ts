@@ -4,6 +4,7 @@ import { env } from '$env/dynamic/private';
 import { db } from '$lib/server/db';
 import { orders } from '$lib/server/db/schema';
 import { orderForShopper } from '$lib/server/orders/view';
+import { orderLineDrawings } from '$lib/server/outputs/garment';
 import { stripe } from '$lib/server/payments/stripe';
 import { startPayment } from '$lib/server/shop/checkout';
 import type { Actions, PageServerLoad } from './$types';
@@ -14,7 +15,7 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const token = url.searchParams.get('t');
 	const order = await orderForShopper(db, params.number, locals.user, token);
 	if (!order) error(404, NOT_FOUND);
-	return { order, token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+	return { order, drawings: await orderLineDrawings(db, order.number), token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
 };
 
 export const actions: Actions = {

@@ -8,15 +8,16 @@ import { measurementProfiles } from '$lib/server/db/schema';
 import { listFabrics, styleBySlug } from '$lib/server/catalogue';
 import { MAX_ITEMS, readBag, writeBag } from '$lib/server/shop/bag';
 import { quoteSkirt } from '$lib/server/shop/quote';
-import { DEFAULT_RULES } from '$lib/drafting';
+import { currentRules } from '$lib/server/shop/rules';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ params, locals }) => {
 	const style = await styleBySlug(db, params.slug);
 	if (!style || style.retiredAt) error(404, 'We do not make that style.');
-	const [fabrics, cards] = await Promise.all([
+	const [fabrics, cards, { rules }] = await Promise.all([
 		listFabrics(db),
-		locals.user ? db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, locals.user.id)).orderBy(desc(measurementProfiles.updatedAt)) : []
+		locals.user ? db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, locals.user.id)).orderBy(desc(measurementProfiles.updatedAt)) : [],
+		currentRules(db)
 	]);
 	const form = await superValidate(zod4(makeFormSchema), { errors: false });
 	return {
@@ -24,7 +25,9 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 		style: { slug: style.slug, name: style.name, kind: style.kind, makingPrice: style.makingPrice, optionPrices: style.optionPrices },
 		fabrics: fabrics.map((f) => ({ id: f.id, name: f.name, colour: f.colour, swatchHex: f.swatchHex, imageUrl: f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, fibreContent: f.fibreContent, careText: f.careText, widthCm: f.widthCm, pricePerMetre: f.pricePerMetre, inStock: f.stockCm >= 100, nap: f.nap, stretch: f.stretch })),
 		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip })),
-		defaultDepth: DEFAULT_RULES.defaultWaistToHip,
+		// The house rules the browser drafts her skirt with, so its drawing is the one the workroom cuts.
+		rules,
+		defaultDepth: rules.defaultWaistToHip,
 		signedIn: Boolean(locals.user)
 	};
 };
@@ -36,7 +39,7 @@ export const actions: Actions = {
 		const item = bagItemFrom(params.slug, form.data);
 		// Drafted and priced on the server before it goes in the bag: an unknown style, fabric or an
 		// undraftable figure is refused here, beside the form.
-		const q = await quoteSkirt(db, item, { drawing: false });
+		const q = await quoteSkirt(db, item);
 		if (!q.ok) return setError(form, q.problem.fields?.fabricId ? 'fabricId' : '', q.problem.message);
 		if (!q.quote.fabric?.inStock) return setError(form, 'fabricId', 'There is not enough of this fabric left for your skirt: please choose another.');
 		const bag = readBag(cookies);
