@@ -39,7 +39,8 @@ async function drawn(page: Page) {
 }
 
 async function settle(page: Page, what: (d: Awaited<ReturnType<typeof drawn>>) => boolean) {
-	await expect.poll(async () => what(await drawn(page))).toBe(true);
+	// The engine loads after first paint: on a busy machine that can take a while.
+	await expect.poll(async () => what(await drawn(page)), { timeout: 30_000 }).toBe(true);
 	return drawn(page);
 }
 
@@ -114,7 +115,7 @@ for (const size of [
 		const summary = page.getByTestId('phone-summary');
 		await expect(summary.locator('svg')).toBeVisible();
 		// A cloth far down the list: the summary is still on screen, and shows its metres and price.
-		const cloth = page.getByRole('radio', { name: /Silk and wool crepe/ });
+		const cloth = page.getByRole('radio', { name: /Linen canvas/ });
 		await cloth.scrollIntoViewIfNeeded();
 		await cloth.check();
 		await expect(summary.getByTestId('summary-total')).toContainText('€');

@@ -218,7 +218,8 @@ function skirtView(draft: Draft, g: GarmentFigures, view: 'front' | 'back', pen:
 	const flipX = (x: Curve): Curve => ({ from: P(-x.from.x, x.from.y), to: P(-x.to.x, x.to.y), ...(x.c1 && x.c2 ? { c1: P(-x.c1.x, x.c1.y), c2: P(-x.c2.x, x.c2.y) } : {}) });
 	// The body of the skirt: right side down, the hem across, the left side up, the waist across.
 	const outline: Curve[] = [...s.side, ...hem, ...reversed(s.side).map(flipX), waistLine];
-	const body: Mark = { kind: 'path', role: 'seam', parts: outline, closed: true, fillCloth: true, ...pen };
+	// The outline stays ink on any cloth: it is what separates the skirt from the paper.
+	const body: Mark = { kind: 'path', role: 'seam', parts: outline, closed: true, fillCloth: true };
 	marks.push(body);
 	// Light falls from the front: the sides turn away and darken a little.
 	for (const side of [1, -1]) {
@@ -303,7 +304,9 @@ function skirtView(draft: Draft, g: GarmentFigures, view: 'front' | 'back', pen:
 	// A facing is turned inside: its lower edge only shows as a faint line; a band sits on the waist.
 	if (band) {
 		const top: Curve = { from: P(w, -band), c1: P(w * 0.4, -band + waistSag * 1.33), c2: P(-w * 0.4, -band + waistSag * 1.33), to: P(-w, -band) };
-		marks.push({ kind: 'path', role: 'seam', parts: [waistLine, { from: P(w, 0), to: P(w, -band) }, top, { from: P(-w, -band), to: P(-w, 0) }], closed: true, fillCloth: true, ...pen });
+		marks.push({ kind: 'path', role: 'seam', parts: [waistLine, { from: P(w, 0), to: P(w, -band) }, top, { from: P(-w, -band), to: P(-w, 0) }], closed: true, fillCloth: true });
+		// The band's seam to the skirt, in the lines' tone (light on a dark cloth).
+		if (pen.tone) marks.push({ kind: 'path', role: 'seam', parts: [waistLine], ...pen, weight: 0.7 });
 		if (view === 'back' && zipAtBack) marks.push({ kind: 'dot', role: 'seam', at: P(-r.waistband.underlap / 2, -band / 2), r: 0.45 });
 	} else {
 		const y = r.facingDepth;
