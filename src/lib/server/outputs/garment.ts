@@ -14,7 +14,7 @@ import { draftSkirt, type Draft, type FitAdjustments, type Measurements, type Sk
 import { garmentView, type GarmentCloth } from '../../drafting/drawing/garment';
 import { drawingToSvg } from '../../drafting/svg';
 import type { Units } from '../../drafting/units';
-import { rulesVersion } from '../shop/rules';
+import { rulesVersion } from '../house/rules';
 
 type FabricRow = { name: string; colour: string; swatchHex: string; imageUploadId: number | null };
 
