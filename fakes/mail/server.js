@@ -22,7 +22,7 @@ import { createWebHandler } from './web.js';
  *   subject: string, text: string | null, html: string | null,
  *   date: string | null, receivedAt: string, messageId: string | null,
  *   headers: Record<string, string>,
- *   attachments: { filename: string | null, contentType: string, size: number }[],
+ *   attachments: { filename: string | null, contentType: string, size: number, cid: string | null }[],
  *   size: number
  * }} StoredMessage
  * @typedef {{ smtpPort: number, webPort: number, webUrl: string, close: () => Promise<void>, messages: StoredMessage[] }} MailFake
@@ -103,7 +103,9 @@ async function toStored(raw, session, id) {
 		attachments: mail.attachments.map((a) => ({
 			filename: a.filename ?? null,
 			contentType: a.contentType,
-			size: a.size
+			size: a.size,
+			// The Content-ID an inline image is named by from the HTML (<img src="cid:…">).
+			cid: a.cid ?? null
 		})),
 		size: raw.length
 	};

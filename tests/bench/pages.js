@@ -82,7 +82,9 @@ export async function measurePages(buildDir) {
 		const f = filesOf(build, nodeIds);
 		return { jsKB: kb(f.js), cssKB: kb(f.css), jsFiles: f.js.length, cssFiles: f.css.length, files: f };
 	};
-	const byId = new Map(build.routes.map((r) => [r.id, r]));
+	// Route groups such as (shop) are not part of the URL: a route is found by its id without them.
+	const ungrouped = (/** @type {string} */ id) => id.replace(/\/\([^)]+\)/g, '') || '/';
+	const byId = new Map(build.routes.map((r) => [ungrouped(r.id), r]));
 	// The floor: what every page sends, i.e. the entries and the root layout alone (node 0).
 	const rootLayout =
 		build.routes.find((r) => r.page)?.page.layouts.find((/** @type {unknown} */ x) => x !== undefined) ?? 0;

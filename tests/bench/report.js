@@ -37,7 +37,7 @@ const notMeasured = (
 export function rowsFrom(raw) {
 	/** @type {Row[]} */
 	const rows = [];
-	const { draft, quote, ticket, checkout, pages } = raw;
+	const { draft, quote, ticket, checkout, pages, live } = raw;
 
 	if (isErr(draft)) rows.push(notMeasured('draft', 'draft: engine', draft?.error ?? 'failed', 'median < 1000 µs'));
 	else {
@@ -58,7 +58,7 @@ export function rowsFrom(raw) {
 				notes: `${s.runs} runs; engine's bench.ts: ${Math.round(draft.engineBench.medianMicros)} µs`
 			});
 		rows.push(single('draft.estimate', 'draft: one draft + fabric estimate', s.noSvg));
-		rows.push(single('draft.full', 'draft: + pieces drawing (as /api/quote)', s.full));
+		rows.push(single('draft.full', 'draft: + pieces drawing', s.full));
 		const rnd = draft.random;
 		rows.push(
 			row({
@@ -236,6 +236,46 @@ export function rowsFrom(raw) {
 				})
 			);
 		}
+	}
+	if (isErr(live)) {
+		rows.push(notMeasured('live.draw', 'configure: draft + drawing per change (Chromium)', live?.error ?? 'failed', 'median ≤ 16 ms'));
+	} else {
+		const d = live.drawMs;
+		rows.push(
+			row({
+				id: 'live.draw',
+				measure: 'configure: draft + drawing per change (Chromium)',
+				unit: 'ms',
+				median: r1(d.median),
+				p95: r1(d.p95),
+				floor: 16.7,
+				floorWhat: 'one frame at 60 Hz',
+				ratio: r3(d.median / 16.7),
+				target: 'median ≤ 16 ms',
+				met: d.median <= 16,
+				notes: `${live.changes} changes typed on ${live.path}; max ${r1(d.max)} ms`
+			})
+		);
+		rows.push(
+			row({
+				id: 'live.firstJs',
+				measure: 'configure: first JS (before load), engine apart',
+				unit: 'KB gz JS',
+				median: r1(live.firstJsKB),
+				target: 'JS ≤ 100 KB',
+				met: live.firstJsKB <= 100,
+				notes: `${live.firstJsFiles} files requested by the load event; first contentful paint ${live.firstPaintMs === null ? '—' : r1(live.firstPaintMs) + ' ms'}`
+			})
+		);
+		rows.push(
+			row({
+				id: 'live.engine',
+				measure: 'configure: engine chunk (after first paint)',
+				unit: 'KB gz JS',
+				median: r1(live.engineKB),
+				notes: live.engineFiles.join(', ')
+			})
+		);
 	}
 	return rows;
 }

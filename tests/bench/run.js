@@ -73,6 +73,7 @@ async function main() {
 	const { measureTicket, TICKET_ROUTE } = await import('./ticket.js');
 	const { measureCheckout } = await import('./checkout.js');
 	const { measurePages, compareWithHtml } = await import('./pages.js');
+	const { measureLive } = await import('./live.js');
 	const mysql = (await import('mysql2/promise')).default;
 
 	// The checkout figure is many orders from one client: lift the per-client order limit for this stack only.
@@ -101,6 +102,10 @@ async function main() {
 		}
 		return { ...p, htmlCheck };
 	});
+
+	const live = await measure('configure page in Chromium: draft + drawing per change (200 changes), first JS, engine chunk', () =>
+		measureLive({ appUrl: env.APP_URL, buildDir: env.QL_BUILD_DIR })
+	);
 
 	const quote = await measure('quote API: POST /api/quote vs GET /healthz, 32 connections, 10 s each', () =>
 		measureQuote({ appUrl: env.APP_URL })
@@ -134,7 +139,7 @@ async function main() {
 		})
 	);
 
-	const raw = { draft, quote, ticket, checkout, pages };
+	const raw = { draft, quote, ticket, checkout, pages, live };
 	const rows = rowsFrom(raw);
 	const report = {
 		startedAt: startedAt.toISOString(),

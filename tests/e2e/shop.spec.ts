@@ -19,7 +19,7 @@ async function measureInInches(page: Page) {
 
 async function pickFabricAndCheckout(page: Page, email: string) {
 	await page.getByRole('radio', { name: /Harbour wool twill/ }).check();
-	await expect(page.getByTestId('pattern-drawing').locator('svg')).toBeVisible();
+	await expect(page.getByTestId('garment-drawing').locator('svg')).toBeVisible();
 	await expect(page.getByTestId('total')).toContainText('€');
 	await expect(page.getByTestId('price')).toContainText('Harbour wool twill');
 	await page.getByRole('button', { name: 'Add to bag' }).click();

@@ -37,9 +37,12 @@ function pathD(parts: Curve[], closed?: boolean): string {
 	return closed ? `${d}Z` : d;
 }
 
+/** How marks are written in one drawing: the pen scale and the id of its cloth pattern. */
+type Ctx = { pen: number; cloth: string | null };
+
 /** One mark as SVG, with the screen pens. */
-function svgOf(m: Mark): string {
-	if (m.kind === 'group') return `<g aria-label="${esc(m.name)}">${m.marks.map(svgOf).join('')}</g>`;
+function svgOf(m: Mark, ctx: Ctx): string {
+	if (m.kind === 'group') return `<g aria-label="${esc(m.name)}">${m.marks.map((x) => svgOf(x, ctx)).join('')}</g>`;
 	// SVG drawings carry no references (url(#…)), so paper under words is not clipped to the seam line:
 	// the words are placed inside it, with the seam line drawn over the paper.
 	if (m.kind === 'patch')
@@ -52,18 +55,49 @@ function svgOf(m: Mark): string {
 		const base = m.baseline === 'alphabetic' ? '' : ' dominant-baseline="middle"';
 		return `<text x="${n(m.at.x)}" y="${n(m.at.y)}" font-size="${n(m.size)}" text-anchor="${m.anchor ?? 'middle'}"${base} fill="${PALETTE[m.tone ?? 'ink']}"${style}${rot}>${esc(m.text)}</text>`;
 	}
-	const fill = m.fill ? `fill="${PALETTE[m.fill]}"${m.fillOpacity !== undefined ? ` fill-opacity="${m.fillOpacity}"` : ''}` : 'fill="none"';
+	const opacity = m.fillOpacity !== undefined ? ` fill-opacity="${m.fillOpacity}"` : '';
+	const fill = m.fillCloth && ctx.cloth ? `fill="${ctx.cloth}"${opacity}` : m.fill ? `fill="${PALETTE[m.fill]}"${opacity}` : 'fill="none"';
 	if (m.noStroke) return `<path d="${pathD(m.parts, m.closed)}" ${fill}/>`;
-	const dash = (m.dashed ?? pen.dashed) ? ` stroke-dasharray="${pen.dash.screen.map(n).join(' ')}"` : '';
-	return `<path d="${pathD(m.parts, m.closed)}" ${fill} stroke="${PALETTE[pen.tone]}" stroke-width="${n(pen.width.screen)}"${dash}/>`;
+	const w = pen.width.screen * ctx.pen * (m.weight ?? 1);
+	const dash = (m.dashed ?? pen.dashed) ? ` stroke-dasharray="${pen.dash.screen.map((v) => n(v * ctx.pen * Math.sqrt(m.weight ?? 1))).join(' ')}"` : '';
+	const joins = ctx.pen !== 1 ? ' stroke-linejoin="round" stroke-linecap="round"' : '';
+	return `<path d="${pathD(m.parts, m.closed)}" ${fill} stroke="${PALETTE[m.tone ?? pen.tone]}" stroke-width="${n(w)}"${dash}${joins}/>`;
 }
 
-/** A drawing model as a self-contained SVG, 1 unit = 1 cm. */
-export function drawingToSvg(d: Drawing): string {
+/** Only #RRGGBB colours and same-site or data image addresses go into the markup. */
+const safeColour = (c: string) => (/^#[0-9a-fA-F]{6}$/.test(c) ? c : '#E8DFCC');
+const safeImage = (u: string) => (/^\/[A-Za-z0-9/_.-]*$/.test(u) || /^data:image\/(png|jpeg|webp);base64,[A-Za-z0-9+/=]+$/.test(u) ? u : null);
+
+/** The cloth as an SVG fill: its colour, or a pattern tiling its swatch image over the colour (so the colour
+ * shows until the image arrives, and where it cannot load). The one reference an SVG of ours carries. */
+function clothDefs(d: Drawing, id: string): { defs: string; fill: string | null } {
+	if (!d.cloth) return { defs: '', fill: null };
+	const colour = safeColour(d.cloth.colour);
+	const image = d.cloth.image ? safeImage(d.cloth.image) : null;
+	if (!image) return { defs: '', fill: colour };
+	const t = n(d.cloth.tile ?? 12);
+	return {
+		defs: `<defs><pattern id="${id}" patternUnits="userSpaceOnUse" width="${t}" height="${t}"><rect width="${t}" height="${t}" fill="${colour}"/><image href="${esc(image)}" width="${t}" height="${t}" preserveAspectRatio="xMidYMid slice"/></pattern></defs>`,
+		fill: `url(#${id})`
+	};
+}
+
+/** A drawing model as a self-contained SVG, 1 unit = 1 cm. `id` names the cloth pattern, unique on a page
+ * that shows several drawings; `size: false` leaves out the printed size (a garment view is not to scale). */
+export function drawingToSvg(d: Drawing, o: { id?: string; size?: boolean; px?: number } = {}): string {
 	const { x, y, w, h } = d.box;
+	const id = `cloth-${(o.id ?? 'd').replace(/[^A-Za-z0-9_-]/g, '')}`;
+	const cloth = clothDefs(d, id);
+	const ctx: Ctx = { pen: d.penScale ?? 1, cloth: cloth.fill };
+	// `px` sizes it in pixels for a rasteriser (an image in a mail).
+	const size = o.px ? ` width="${Math.round(o.px)}" height="${Math.round((o.px * h) / w)}"` : o.size === false ? '' : ` width="${n(w)}cm" height="${n(h)}cm"`;
+	const data = Object.entries(d.data ?? {})
+		.map(([k, v]) => ` data-${k.replace(/[^a-z0-9-]/g, '')}="${esc(typeof v === 'number' ? n(v) : v)}"`)
+		.join('');
+	const desc = d.description ? `<desc>${esc(d.description)}</desc>` : '';
 	return (
-		`<svg xmlns="http://www.w3.org/2000/svg" viewBox="${n(x)} ${n(y)} ${n(w)} ${n(h)}" width="${n(w)}cm" height="${n(h)}cm" font-family="Lora, Georgia, serif" role="img">` +
-		`<title>${esc(d.title)}</title>${d.marks.map(svgOf).join('')}</svg>`
+		`<svg xmlns="http://www.w3.org/2000/svg" viewBox="${n(x)} ${n(y)} ${n(w)} ${n(h)}"${size} font-family="Lora, Georgia, serif" role="img"${data}>` +
+		`<title>${esc(d.title)}</title>${desc}${cloth.defs}${d.marks.map((m) => svgOf(m, ctx)).join('')}</svg>`
 	);
 }
 

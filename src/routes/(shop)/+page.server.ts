@@ -14,7 +14,7 @@ export const load: PageServerLoad = async () => {
 			description: s.description,
 			makingPrice: s.makingPrice,
 			leadDays: s.leadDays,
-			drawing: sampleDrawing(s.kind, rules, id, 'pieces')
+			drawing: sampleDrawing(s.kind, rules, id, 'garment')
 		}))
 	};
 };

@@ -72,7 +72,13 @@ export type Mark =
 			noStroke?: boolean;
 			fill?: Tone;
 			fillOpacity?: number;
+			/** Filled with the drawing's cloth (its colour, or its swatch image as a pattern): garment views. */
+			fillCloth?: boolean;
 			dashed?: boolean;
+			/** A tone other than the role's (a garment's lines drawn light on a dark cloth). */
+			tone?: Tone;
+			/** Stroke width as a share of the role's pen (a garment's fine topstitching). */
+			weight?: number;
 	  }
 	| { kind: 'dot'; role: Role; at: Point; r: number }
 	| {
@@ -100,6 +106,16 @@ export interface Drawing {
 	title: string;
 	box: { x: number; y: number; w: number; h: number };
 	marks: Mark[];
+	/** Pens drawn this many times their screen width: a garment view is seen much smaller than 1:1
+	 * pieces of the same size in cm, and its outline must still read. */
+	penScale?: number;
+	/** The cloth that marks with `fillCloth` are filled with: a colour (#RRGGBB) and, if given, a swatch image
+	 * repeated over it every `tile` cm. */
+	cloth?: { colour: string; image?: string | null; tile?: number };
+	/** A longer description for assistive technology (the SVG's <desc>). */
+	description?: string;
+	/** Figures of the drawing a back end may expose for checking (SVG: data-* attributes on the root). */
+	data?: Record<string, number | string>;
 }
 
 /** Points of paper (1/72 in, 25.4 mm to the inch) a centimetre of cloth takes at a scale 1:n. */

@@ -2,6 +2,7 @@ import nodemailer from 'nodemailer';
 import { and, asc, eq, isNull, lte, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { outbox } from '../db/schema';
+import { mailImages } from '../outputs/garment';
 
 export type MailMessage = { to: string; subject: string; text: string; html: string; orderId?: number | null };
 
@@ -59,12 +60,15 @@ export async function deliverOne(db: Db, settings: MailSettings, id: number) {
 			.for('update', { skipLocked: true });
 		if (!msg) return false;
 		try {
+			// The skirt drawings the HTML names go with it as inline images (outputs/garment.ts says why).
+			const attachments = await mailImages(db, msg.html).catch(() => []);
 			await createTransport(settings).sendMail({
 				from: settings.from,
 				to: msg.toAddress,
 				subject: msg.subject,
 				text: msg.text,
-				html: msg.html
+				html: msg.html,
+				...(attachments.length ? { attachments } : {})
 			});
 			await tx.update(outbox).set({ sentAt: new Date(), attempts: msg.attempts + 1, lastError: null }).where(eq(outbox.id, id));
 			return true;

@@ -3,8 +3,11 @@ import { firstName } from '$lib/orders/names';
 const esc = (s: string) =>
 	s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
-export function layout(title: string, paragraphs: string[], link?: { href: string; label: string }) {
-	const body = paragraphs.map((p) => `<p style="margin:0 0 14px">${esc(p)}</p>`).join('');
+export type MailImage = { cid: string; alt: string };
+
+export function layout(title: string, paragraphs: string[], link?: { href: string; label: string }, images: MailImage[] = []) {
+	const pictures = images.map((i) => `<p style="margin:0 0 14px"><img src="cid:${esc(i.cid)}" alt="${esc(i.alt)}" width="280" style="display:block;width:280px;max-width:100%;height:auto;border:1px solid #e3dccd;border-radius:6px;background:#fff"></p>`).join('');
+	const body = paragraphs.map((p) => `<p style="margin:0 0 14px">${esc(p)}</p>`).join('') + pictures;
 	const button = link
 		? `<p style="margin:22px 0"><a href="${esc(link.href)}" style="background:#35598A;color:#fff;padding:10px 18px;border-radius:6px;text-decoration:none">${esc(link.label)}</a></p>`
 		: '';
@@ -40,6 +43,7 @@ type OrderSummary = {
 	promisedDate: string;
 	lines: string[];
 	link: string;
+	images?: MailImage[];
 };
 
 
@@ -48,7 +52,7 @@ function orderMail(subject: string, o: OrderSummary, lead: string, extra: string
 	return {
 		subject,
 		text: `${paragraphs.join('\n\n')}\n\nYour order: ${o.link}\n`,
-		html: layout(subject, paragraphs, { href: o.link, label: `See order ${o.number}` })
+		html: layout(subject, paragraphs, { href: o.link, label: `See order ${o.number}` }, o.images)
 	};
 }
 

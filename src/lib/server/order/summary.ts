@@ -3,12 +3,13 @@ import type { Db } from '../db/client';
 import { fabrics, orderLines, orders, styles } from '../db/schema';
 import { formatDate, formatMoney } from '$lib/format';
 import { orderLink } from './link';
+import { lineCid } from '../outputs/garment';
 import type { Tx } from './stage';
 
 /** The few lines of an order every e-mail repeats: what, how much, when. */
 export async function orderSummary(db: Db | Tx, order: typeof orders.$inferSelect) {
 	const lines = await db
-		.select({ style: styles.name, fabric: fabrics.name, colour: fabrics.colour, total: orderLines.lineTotal })
+		.select({ id: orderLines.id, style: styles.name, fabric: fabrics.name, colour: fabrics.colour, total: orderLines.lineTotal })
 		.from(orderLines)
 		.innerJoin(styles, eq(styles.id, orderLines.styleId))
 		.innerJoin(fabrics, eq(fabrics.id, orderLines.fabricId))
@@ -19,6 +20,8 @@ export async function orderSummary(db: Db | Tx, order: typeof orders.$inferSelec
 		total: formatMoney(order.total, order.currency),
 		promisedDate: formatDate(order.promisedDate),
 		lines: lines.map((l) => `${l.style} in ${l.fabric.toLowerCase()}, ${l.colour.toLowerCase()}: ${formatMoney(l.total, order.currency)}`),
+		// Each skirt drawn as an inline image, rendered from the order when the mail is sent (outputs/garment.ts).
+		images: lines.map((l) => ({ cid: lineCid(l.id), alt: `Your ${l.style.toLowerCase()} in ${l.fabric.toLowerCase()}, ${l.colour.toLowerCase()}, front and back` })),
 		link: orderLink(order.number)
 	};
 }

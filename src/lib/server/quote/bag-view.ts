@@ -1,6 +1,6 @@
 import type { Db } from '../db/client';
 import type { BagItem } from '$lib/forms/quote';
-import { toSvg } from '$lib/drafting';
+import { clothOf, garmentSvg } from '../outputs/garment';
 import { quoteBag } from './quote';
 
 /** The bag as the shopper sees it, every line priced again from the database in one quote. */
@@ -17,7 +17,7 @@ export async function viewBag(db: Db, items: BagItem[]) {
 			fabric,
 			price: q.pricing,
 			warnings: q.draft.warnings,
-			drawing: toSvg(q.draft, { view: 'pieces', units: item.units }),
+			drawing: q.fabric ? garmentSvg(q.draft, clothOf(q.fabric), `bag-${item.id}`, item.units) : null,
 			measurements: item.measurements,
 			units: item.units,
 			options: item.options,

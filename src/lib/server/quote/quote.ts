@@ -5,7 +5,7 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, toSvg, type Draft, type HouseRules } from '$lib/drafting';
+import { DraftInputError, draftSkirt, estimateFabric, type Draft, type HouseRules } from '$lib/drafting';
 import { failure, type Failure } from '$lib/failure';
 import type { MeasurementsCm, ShopOptions } from '$lib/forms/quote';
 import { confirmAsk } from '$lib/forms/confirm';
@@ -109,9 +109,10 @@ export async function quoteBag(db: Db, inputs: QuoteInput[], opts: { now?: Date 
 
 /**
  * One skirt as the configure page and the quote API show it: the bag of one, with the shipping that
- * bag would pay. The drawing is optional (the API's headless clients rarely want it).
+ * bag would pay. It draws nothing: the configure page drafts and draws in the browser, and the pages that
+ * show a skirt draw it from the draft themselves.
  */
-export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: boolean; now?: Date } = {}) {
+export async function quoteSkirt(db: Db, input: QuoteInput, opts: { now?: Date } = {}) {
 	const bag = await quoteBag(db, [input], opts);
 	const line = bag.lines[0];
 	if (!line.ok) return line;
@@ -125,7 +126,6 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 			figures: draft.figures,
 			warnings: draft.warnings,
 			pieces: draft.pieces.map((p) => ({ name: p.name, cut: p.cut })),
-			drawing: opts.drawing === false ? null : toSvg(draft, { view: 'pieces', units: input.units }),
 			fabric: fabric && fabricCm !== null ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: fabricCm, inStock: fabric.stockCm >= fabricCm } : null,
 			price: pricing ? { ...pricing, shipping: bag.shipping, total: pricing.total + bag.shipping, currency: bag.currency } : null,
 			shipBy: line.shipBy

@@ -6,6 +6,7 @@ import { orders } from '$lib/server/db/schema';
 import { orderForShopper } from '$lib/server/order/view';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { startPayment } from '$lib/server/order/place';
+import { orderLineDrawings } from '$lib/server/outputs/garment';
 import type { Actions, PageServerLoad } from './$types';
 
 const NOT_FOUND = 'We could not find that order. Open it from the link in your e-mail, or sign in to the account you ordered with.';
@@ -14,7 +15,7 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const token = url.searchParams.get('t');
 	const order = await orderForShopper(db, params.number, locals.user, token);
 	if (!order) error(404, NOT_FOUND);
-	return { order, token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+	return { order, drawings: await orderLineDrawings(db, order.number), token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
 };
 
 export const actions: Actions = {

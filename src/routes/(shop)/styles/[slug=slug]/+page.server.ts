@@ -11,7 +11,8 @@ export const load: PageServerLoad = async ({ params }) => {
 	const [{ id, rules }, fabrics] = await Promise.all([currentRules(db), listFabrics(db)]);
 	return {
 		style: { slug: style.slug, name: style.name, kind: style.kind, description: style.description, makingPrice: style.makingPrice, leadDays: style.leadDays, optionPrices: style.optionPrices },
-		drawing: sampleDrawing(style.kind, rules, id),
+		drawing: sampleDrawing(style.kind, rules, id, 'garment'),
+		pieces: sampleDrawing(style.kind, rules, id, 'pieces'),
 		fabrics: fabrics.map((f) => ({ id: f.id, name: f.name, colour: f.colour, swatchHex: f.swatchHex, imageUrl: f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, fibreContent: f.fibreContent, careText: f.careText, widthCm: f.widthCm, pricePerMetre: f.pricePerMetre, inStock: f.stockCm >= 100, nap: f.nap, stretch: f.stretch }))
 	};
 };

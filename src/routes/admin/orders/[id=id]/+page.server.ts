@@ -6,6 +6,7 @@ import { requestRefund } from '$lib/server/order/refund';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { moveFromForm } from '$lib/server/order/move-action';
 import { orderForOwner } from '$lib/server/order/workroom-view';
+import { orderLineDrawings } from '$lib/server/outputs/garment';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
@@ -14,7 +15,7 @@ export const load: PageServerLoad = async (event) => {
 	const found = await orderForOwner(db, Number(event.params.id));
 	if (!found) error(404, 'No such order.');
 	// The refund form's own key, made as the page loads: the same form sent twice is one refund.
-	return { ...found, refundKey: crypto.randomUUID() };
+	return { ...found, drawings: await orderLineDrawings(db, found.order.id), refundKey: crypto.randomUUID() };
 };
 
 const refundSchema = z.object({

@@ -9,7 +9,6 @@ import { listFabrics, styleBySlug } from '$lib/server/catalogue/listing';
 import { MAX_ITEMS, readBag, writeBag } from '$lib/server/quote/bag';
 import { quoteSkirt } from '$lib/server/quote/quote';
 import { currentRules } from '$lib/server/house/rules';
-import { DEFAULT_RULES } from '$lib/drafting';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ params, locals }) => {
@@ -26,7 +25,9 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 		style: { slug: style.slug, name: style.name, kind: style.kind, makingPrice: style.makingPrice, optionPrices: style.optionPrices },
 		fabrics: fabrics.map((f) => ({ id: f.id, name: f.name, colour: f.colour, swatchHex: f.swatchHex, imageUrl: f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, fibreContent: f.fibreContent, careText: f.careText, widthCm: f.widthCm, pricePerMetre: f.pricePerMetre, inStock: f.stockCm >= 100, nap: f.nap, stretch: f.stretch })),
 		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, waistToKnee: c.waistToKnee, adjustments: c.adjustments ?? null })),
-		defaultDepth: DEFAULT_RULES.defaultWaistToHip,
+		// The house rules the browser drafts her skirt with, so its drawing is the one the workroom cuts.
+		rules,
+		defaultDepth: rules.defaultWaistToHip,
 		defaultKnee: rules.kneeDepth,
 		signedIn: Boolean(locals.user)
 	};
@@ -39,7 +40,7 @@ export const actions: Actions = {
 		const item = bagItemFrom(params.slug, form.data);
 		// Drafted and priced on the server before it goes in the bag: an unknown style, fabric or an
 		// undraftable figure is refused here, beside the form.
-		const q = await quoteSkirt(db, item, { drawing: false });
+		const q = await quoteSkirt(db, item);
 		if (!q.ok) {
 			// A figure she may confirm: the message goes beside the confirm box, which she ticks to go on.
 			if (q.confirm) return setError(form, 'confirmed', q.confirm.suggestion === null ? q.confirm.message : `${q.confirm.message} Did you mean ${q.confirm.suggestion} ${form.data.units}?`);
