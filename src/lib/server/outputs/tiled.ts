@@ -152,7 +152,7 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	// The header: the cell's name large, where it sits, how to join it.
 	const name = cellName(c);
 	line(doc, name, TILE_MARGIN, TILE_MARGIN + 14, { size: 18, weight: 600 });
-	line(doc, `page ${index + 2} of ${pages} · ${src.number} · 1:1, cm`, TILE_MARGIN + 38, TILE_MARGIN + 8, { size: 8, weight: 600 });
+	line(doc, `page ${index + 2} of ${pages} · cell ${name} · ${src.number} · 1:1, cm`, TILE_MARGIN + 38, TILE_MARGIN + 8, { size: 8, weight: 600 });
 	line(doc, 'Trim on the grey line at left and top; lap over the neighbour, circles matching.', TILE_MARGIN + 38, TILE_MARGIN + 18, {
 		size: 7,
 		color: PALETTE.pencil,
@@ -169,7 +169,7 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	});
 	doc.restore();
 	// The trim line round the cell: drawn over the pieces so it is whole (the scale test finds it).
-	doc.save().rect(left, top, cw, ch).lineWidth(0.6).strokeColor(PALETTE.pencil).stroke().restore();
+	doc.save().rect(left, top, cw, ch).lineWidth(1).strokeColor(PALETTE.pencil).stroke().restore();
 	// Circles on every edge shared with another printed page, and that page's name beside them.
 	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
 	const near = (dr: number, dc: number) => printed.get(`${c.row + dr}:${c.col + dc}`);
