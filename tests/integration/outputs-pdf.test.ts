@@ -107,7 +107,8 @@ describe('tiled print', () => {
 		// Within 1 mm: the printed line's own width (0.9 pt, 0.3 mm) is part of what is measured.
 		expect(Math.abs(found.cm[0] - engine[0])).toBeLessThanOrEqual(0.1);
 		expect(Math.abs(found.cm[1] - engine[1])).toBeLessThanOrEqual(0.1);
-	});
+		// Rendering and reading some thirty pages of pixels takes a while on a shared machine.
+	}, 240_000);
 });
 
 describe('roll, A0 and projector', () => {

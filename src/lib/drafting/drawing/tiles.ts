@@ -203,6 +203,9 @@ function inside(poly: Point[], q: Point): boolean {
 /** Whether an outline (strip cm) has anything inside a rectangle: an edge through it, or the rectangle
  * wholly inside the outline (a page in the middle of a big piece is printed: it carries its marks). */
 export function outlineMeets(poly: Point[], x0: number, y0: number, x1: number, y1: number): boolean {
+	let [bx0, by0, bx1, by1] = [Infinity, Infinity, -Infinity, -Infinity];
+	for (const q of poly) [bx0, by0, bx1, by1] = [Math.min(bx0, q.x), Math.min(by0, q.y), Math.max(bx1, q.x), Math.max(by1, q.y)];
+	if (bx0 > x1 || bx1 < x0 || by0 > y1 || by1 < y0) return false;
 	for (let i = 0; i < poly.length; i++) if (segmentMeetsRect(poly[i], poly[(i + 1) % poly.length], x0, y0, x1, y1)) return true;
 	return inside(poly, { x: (x0 + x1) / 2, y: (y0 + y1) / 2 });
 }

@@ -2,7 +2,7 @@
 // model's marks in centimetres of the strip, and the test square every full-scale page is checked by.
 import PDFDocument from 'pdfkit';
 import type { Piece } from '../../drafting';
-import { PALETTE, ptPerCm, type Mark, type Tone } from '../../drafting/drawing/model';
+import { PALETTE, ptPerCm, type Mark, type Rect, type Tone } from '../../drafting/drawing/model';
 import { pieceMarks } from '../../drafting/drawing/piece';
 import { spotMap, type StripPlan } from '../../drafting/drawing/tiles';
 import { pdfMeasure } from '../ticket/draw-pdf';
@@ -102,3 +102,28 @@ export const DARK: Record<Tone, string> = {
 	paper: '#10131C',
 	white: '#10131C'
 };
+
+/** A mark with the box (cm) it may ink: a page draws only the marks whose box it shows. */
+export interface BoxedMark {
+	mark: Mark;
+	box: Rect;
+}
+
+/** Marks, groups opened, each with a generous box (text by its length at its size, any angle). */
+export function boxed(marks: Mark[]): BoxedMark[] {
+	const out: BoxedMark[] = [];
+	const of = (pts: { x: number; y: number }[], pad: number): Rect => ({
+		x0: Math.min(...pts.map((q) => q.x)) - pad,
+		y0: Math.min(...pts.map((q) => q.y)) - pad,
+		x1: Math.max(...pts.map((q) => q.x)) + pad,
+		y1: Math.max(...pts.map((q) => q.y)) + pad
+	});
+	for (const mk of marks) {
+		if (mk.kind === 'group') out.push(...boxed(mk.marks));
+		else if (mk.kind === 'path') out.push({ mark: mk, box: of(mk.parts.flatMap((c) => [c.from, c.to, ...(c.c1 && c.c2 ? [c.c1, c.c2] : [])]), 0.5) });
+		else if (mk.kind === 'dot') out.push({ mark: mk, box: of([mk.at], mk.r + 0.5) });
+		else if (mk.kind === 'text') out.push({ mark: mk, box: of([mk.at], mk.size * (0.7 * [...mk.text].length + 1)) });
+		else out.push({ mark: mk, box: of(mk.rects.flatMap((r) => [{ x: r.x0, y: r.y0 }, { x: r.x1, y: r.y1 }]), 0.5) });
+	}
+	return out;
+}

@@ -8,7 +8,7 @@ import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '../../dr
 import { flatten } from '../../drafting/outline';
 import { drawMarks } from '../ticket/draw-pdf';
 import { MM, line } from '../ticket/text';
-import { K, newDoc, stripMarks, testSquare, type Doc } from './doc';
+import { K, boxed, newDoc, stripMarks, testSquare, type BoxedMark, type Doc } from './doc';
 import { OutputError } from './errors';
 import type { PatternSource } from './source';
 
@@ -125,7 +125,7 @@ function coverPage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePla
 }
 
 function footer(doc: Doc, src: PatternSource, w: number, h: number, page: number, of: number) {
-	line(doc, `${src.number} · full-size pattern · scale 1:1, centimetres · page ${page} of ${of}`, w / 2, h - TILE_MARGIN + 2, {
+	line(doc, `${src.number} · full-size pattern · scale 1:1, centimetres · page ${page} of ${of}`, w / 2, h - 4.5 * MM, {
 		size: 6.5,
 		align: 'center',
 		color: PALETTE.pencil
@@ -141,7 +141,7 @@ function target(doc: Doc, x: number, y: number) {
 	doc.restore();
 }
 
-function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: ReturnType<typeof stripMarks>, index: number) {
+function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], index: number) {
 	const c = plan.cells[index];
 	const [pw, ph] = pageName(paper, landscape);
 	doc.addPage({ size: [pw, ph], margin: 0 });
@@ -163,10 +163,9 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	doc.save();
 	doc.rect(left - TILE_OVERLAP, top - TILE_OVERLAP, cw + 2 * TILE_OVERLAP, ch + 2 * TILE_OVERLAP).clip();
 	const map = { k: K, ox: left - c.x * K, oy: top - c.y * K };
-	plan.strip.spots.forEach((s, i) => {
-		if (s.x > view.x1 || s.x + s.w < view.x0 || s.y > view.y1 || s.y + s.h < view.y0) return;
-		drawMarks(doc, marks[i], map);
-	});
+	// Only the marks this page shows: a piece spans many pages, and letters cost the most to set.
+	const shown = marks.filter(({ box: b }) => b.x0 <= view.x1 && b.x1 >= view.x0 && b.y0 <= view.y1 && b.y1 >= view.y0);
+	drawMarks(doc, shown.map((b) => b.mark), map);
 	doc.restore();
 	// The trim line round the cell: drawn over the pieces so it is whole (the scale test finds it).
 	doc.save().rect(left, top, cw, ch).lineWidth(1).strokeColor(PALETTE.pencil).stroke().restore();
@@ -202,7 +201,7 @@ export async function renderTiled(src: PatternSource, paper: TilePaper): Promise
 	const { plan, landscape } = tilePlanFor(src, paper);
 	const { doc, done } = newDoc(`Full-size pattern ${src.number} (${TILE_PAPER[paper].name}, tiled)`, 'Full-size pattern', src.number);
 	coverPage(doc, src, paper, plan, landscape);
-	const marks = stripMarks(doc, src.pieces, plan.strip, src.number);
+	const marks = boxed(stripMarks(doc, src.pieces, plan.strip, src.number).flat());
 	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, i));
 	doc.end();
 	return { bytes: await done, pages: plan.cells.length + 1, plan, landscape };
