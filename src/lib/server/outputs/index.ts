@@ -37,7 +37,7 @@ async function dbOf(db?: Db): Promise<Db> {
 }
 
 async function plotterWidth(db: Db): Promise<number> {
-	const { shopSettingsOf } = await import('../shop/rules');
+	const { shopSettingsOf } = await import('../house/rules');
 	const w = Number((await shopSettingsOf(db)).plotterWidthCm);
 	return Number.isFinite(w) && w > 0 ? w : DEFAULT_PLOTTER_CM;
 }
