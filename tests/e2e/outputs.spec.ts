@@ -3,16 +3,19 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 
 // The download choices on the workroom's order page: the paper, a roll's width shown only for a roll,
 // the file it gives, and the choice offered first next time. QL_SHOT_DIR keeps screenshots to look at.
-test('a cutter chooses the roll, downloads the pattern and finds the roll offered first next time', async ({ page }) => {
-	test.setTimeout(90_000);
-	const account = DEMO_SIGN_INS.accounts.find((a) => a.email === 'tomasz@ondine.example')!;
+test('the owner chooses the roll in the workroom, downloads the pattern and finds the roll offered first next time', async ({ page }) => {
+	test.setTimeout(120_000);
+	const account = DEMO_SIGN_INS.accounts.find((a) => a.role === 'owner')!;
 	await page.goto('/signin');
 	await page.getByLabel('E-mail', { exact: true }).fill(account.email);
 	await page.getByLabel('Password').fill(DEMO_SIGN_INS.password);
 	await page.getByRole('button', { name: 'Sign in' }).click();
-	await expect(page).toHaveURL(/\/workroom$/);
-	// QL-1007 (a full-circle skirt) is in the seed's cutting stage, on the queue.
-	await page.getByRole('link', { name: 'QL-1007' }).first().click();
+	await expect(page).toHaveURL(/\/admin$/);
+	// QL-1007, the seed's full-circle skirt: found in the owner's order list, opened in the workroom.
+	await page.goto('/admin/orders?q=QL-1007');
+	const href = await page.getByRole('link', { name: 'QL-1007' }).first().getAttribute('href');
+	const id = /\/(\d+)$/.exec(href ?? '')![1];
+	await page.goto(`/workroom/orders/${id}`);
 	await expect(page.getByRole('heading', { level: 1 })).toHaveText('QL-1007');
 	const paper = page.getByLabel('Pattern on');
 	await expect(page.getByLabel('Roll width (cm)')).toHaveCount(0);
