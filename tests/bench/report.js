@@ -37,7 +37,8 @@ const notMeasured = (
 export function rowsFrom(raw) {
 	/** @type {Row[]} */
 	const rows = [];
-	const { draft, quote, ticket, checkout, pages, live } = raw;
+	const { draft, outputs, quote, ticket, checkout, pages, live } = raw;
+	rows.push(...outputRows(outputs));
 
 	if (isErr(draft)) rows.push(notMeasured('draft', 'draft: engine', draft?.error ?? 'failed', 'median < 1000 µs'));
 	else {
@@ -311,4 +312,38 @@ export function printTable(rows, report) {
 	const seen = new Set();
 	for (const r of rows)
 		if (r.floorWhat && !seen.has(r.floorWhat)) seen.add(r.floorWhat) && console.log(`  ${r.measure}: ${r.floorWhat}`);
+}
+
+/** The full-size pattern files (tests/bench/outputs.ts). @param {any} o @returns {Row[]} */
+function outputRows(o) {
+	if (isErr(o)) return [notMeasured('outputs', 'outputs: full-size PDFs', o?.error ?? 'failed', 'tiled ≤ 3× bare pdfkit')];
+	const ms = (/** @type {any} */ x) => r1(x.median);
+	return [
+		row({
+			id: 'outputs.tiled-a4',
+			measure: `outputs: tiled A4 PDF, full-circle skirt (${o.pages} pages)`,
+			unit: 'ms',
+			median: ms(o.tiled),
+			p95: r1(o.tiled.p95),
+			floor: ms(o.floor),
+			floorWhat: `bare pdfkit, ${o.pages} pages, same Lora`,
+			ratio: r3(o.tiled.median / o.floor.median),
+			target: '≤ 3× floor',
+			met: o.tiled.median <= 3 * o.floor.median,
+			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB; ${o.tiled.n} runs`
+		}),
+		row({ id: 'outputs.roll', measure: 'outputs: roll PDF (91.4 cm), full-circle skirt', unit: 'ms', median: ms(o.roll), p95: r1(o.roll.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.roll.median / o.floor.median) }),
+		row({ id: 'outputs.projector', measure: 'outputs: projector PDF, full-circle skirt', unit: 'ms', median: ms(o.projector), p95: r1(o.projector.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.projector.median / o.floor.median) }),
+		row({
+			id: 'outputs.lay',
+			measure: 'outputs: lay PDF at full size, drawing only',
+			unit: 'ms',
+			median: ms(o.layDraw),
+			p95: r1(o.layDraw.p95),
+			floor: ms(o.floor),
+			floorWhat: 'bare pdfkit (as above)',
+			ratio: r3(o.layDraw.median / o.floor.median),
+			notes: `the engine's lay search before it: median ${ms(o.laySearch)} ms`
+		})
+	];
 }

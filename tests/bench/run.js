@@ -24,10 +24,10 @@ async function stopStack() {
 }
 onShutdown(stopStack);
 
-/** Runs the in-process engine measures in a child (TypeScript through tsx) and parses its JSON line. */
-function draftBench() {
+/** Runs in-process measures in a child (TypeScript through tsx) and parses its JSON line. */
+function draftBench(script = 'tests/bench/draft.ts') {
 	return new Promise((resolve, reject) => {
-		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], {
+		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', script], {
 			cwd: ROOT,
 			stdio: ['ignore', 'pipe', 'pipe']
 		});
@@ -39,11 +39,11 @@ function draftBench() {
 		child.on('close', (code) => {
 			clearTimeout(timer);
 			const line = out.trim().split('\n').at(-1) ?? '';
-			if (code !== 0) return reject(new Error(`tests/bench/draft.ts exited ${code}: ${err.slice(-2000)}`));
+			if (code !== 0) return reject(new Error(`${script} exited ${code}: ${err.slice(-2000)}`));
 			try {
 				resolve(JSON.parse(line));
 			} catch {
-				reject(new Error(`tests/bench/draft.ts printed no JSON: ${out.slice(-500)}`));
+				reject(new Error(`${script} printed no JSON: ${out.slice(-500)}`));
 			}
 		});
 	});
@@ -82,7 +82,8 @@ async function main() {
 	const env = s.testEnv;
 
 	// The engine alone first, while the app sits idle.
-	const draft = await measure('draft: in-process engine timings (tsx)', draftBench);
+	const draft = await measure('draft: in-process engine timings (tsx)', () => draftBench());
+	const outputs = await measure('outputs: full-size pattern PDFs, in process (tsx)', () => draftBench('tests/bench/outputs.ts'));
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
@@ -139,7 +140,7 @@ async function main() {
 		})
 	);
 
-	const raw = { draft, quote, ticket, checkout, pages, live };
+	const raw = { draft, outputs, quote, ticket, checkout, pages, live };
 	const rows = rowsFrom(raw);
 	const report = {
 		startedAt: startedAt.toISOString(),

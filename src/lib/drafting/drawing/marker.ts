@@ -157,7 +157,7 @@ function edgeDistance(poly: Pt[], q: Pt) {
  * from the numbers already placed (pieces fitted into each other can share a middle, and a curved piece's
  * middle can lie outside it). A grid search is enough at the size of a number on the page.
  */
-function labelPoint(poly: Pt[], placed: Pt[], size: number): Pt {
+export function labelPoint(poly: Pt[], placed: Pt[], size: number): Pt {
 	const xs = poly.map((q) => q.x);
 	const ys = poly.map((q) => q.y);
 	const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];

@@ -374,3 +374,14 @@ export const outbox = mysqlTable(
 	},
 	(t) => [index('mail_outbox_due_idx').on(t.sentAt, t.nextAttemptAt), index('mail_outbox_order_idx').on(t.orderId)]
 );
+
+// The paper each person last printed a full-size pattern on (and her roll width), offered first next
+// time: a cutter with a plotter keeps choosing the roll, a home sewer A4 or Letter.
+export const outputPreferences = mysqlTable('output_preference', {
+	userId: varchar('user_id', { length: 255 })
+		.primaryKey()
+		.references(() => users.id, { onDelete: 'cascade' }),
+	paper: mysqlEnum('paper', ['a4', 'letter', 'a0', 'roll', 'projector']).notNull(),
+	rollWidthCm: cm('roll_width_cm', 4),
+	updatedAt: updated()
+});

@@ -28,7 +28,16 @@ export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
 	return rules;
 }
 
-export type ShopSettings = { currency: string; paperSize: 'A4' | 'Letter'; units: 'cm' | 'in'; shipping: ShippingRule; ordersPerDay: number; remakePolicy: string };
+export type ShopSettings = {
+	currency: string;
+	paperSize: 'A4' | 'Letter';
+	units: 'cm' | 'in';
+	shipping: ShippingRule;
+	ordersPerDay: number;
+	remakePolicy: string;
+	/** The workroom plotter's roll width (cm), the default width of a full-size pattern on a roll. */
+	plotterWidthCm: number;
+};
 
 const DEFAULTS: ShopSettings = {
 	currency: 'EUR',
@@ -36,6 +45,8 @@ const DEFAULTS: ShopSettings = {
 	units: 'cm',
 	shipping: DEFAULT_SHIPPING,
 	ordersPerDay: 4,
+	// A 36 in roll, the common plotter width (91.4 cm).
+	plotterWidthCm: 91.4,
 	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.'
 };
 

@@ -1,6 +1,6 @@
 // The drawing model's back end for pdfkit: marks in cm of the drawing onto the page at k points a cm,
 // with the print pens (widths in points whatever the scale). Nothing is decided here but strokes.
-import { PALETTE, PENS, type Curve, type Mark, type Measure } from '../../drafting/drawing/model';
+import { PALETTE, PENS, type Curve, type Mark, type Measure, type Role, type Tone } from '../../drafting/drawing/model';
 import { line, widthOf } from './text';
 
 type Doc = PDFKit.PDFDocument;
@@ -31,11 +31,19 @@ function trace(doc: Doc, parts: Curve[], m: PageMap, closed?: boolean) {
 	if (closed) doc.closePath();
 }
 
+/** Another look for the same marks (the projector's light lines on a dark ground): colours by tone,
+ * and pens made wider by role. */
+export interface Look {
+	palette?: Record<Tone, string>;
+	widen?: Partial<Record<Role, number>>;
+}
+
 /** Draws marks in order. */
-export function drawMarks(doc: Doc, marks: Mark[], m: PageMap) {
+export function drawMarks(doc: Doc, marks: Mark[], m: PageMap, look: Look = {}) {
+	const colours = look.palette ?? PALETTE;
 	for (const mk of marks) {
 		if (mk.kind === 'group') {
-			drawMarks(doc, mk.marks, m);
+			drawMarks(doc, mk.marks, m, look);
 			continue;
 		}
 		doc.save();
@@ -45,28 +53,28 @@ export function drawMarks(doc: Doc, marks: Mark[], m: PageMap) {
 			doc.clip();
 			for (const r of mk.rects)
 				doc.rect(m.ox + r.x0 * m.k, m.oy + r.y0 * m.k, (r.x1 - r.x0) * m.k, (r.y1 - r.y0) * m.k);
-			doc.fill(PALETTE.white);
+			doc.fill(colours.white);
 		} else if (mk.kind === 'text') {
 			line(doc, mk.text, m.ox + mk.at.x * m.k, m.oy + mk.at.y * m.k, {
 				size: mk.size * m.k,
 				weight: mk.weight,
-				color: PALETTE[mk.tone ?? 'ink'],
+				color: colours[mk.tone ?? 'ink'],
 				align: mk.anchor === 'start' ? 'left' : mk.anchor === 'end' ? 'right' : 'center',
 				middle: mk.baseline !== 'alphabetic',
 				angle: -(mk.angle ?? 0)
 			});
 		} else {
 			const pen = PENS[mk.role];
-			if (mk.kind === 'dot') doc.circle(m.ox + mk.at.x * m.k, m.oy + mk.at.y * m.k, mk.r * m.k).fill(PALETTE[pen.tone]);
+			if (mk.kind === 'dot') doc.circle(m.ox + mk.at.x * m.k, m.oy + mk.at.y * m.k, mk.r * m.k).fill(colours[pen.tone]);
 			else {
 				trace(doc, mk.parts, m, mk.closed);
-				const fill = mk.fill ? PALETTE[mk.fill] : null;
+				const fill = mk.fill ? colours[mk.fill] : null;
 				if (fill && mk.fillOpacity !== undefined) doc.fillOpacity(mk.fillOpacity);
-				if (mk.noStroke) doc.fill(fill ?? PALETTE[pen.tone]);
+				if (mk.noStroke) doc.fill(fill ?? colours[pen.tone]);
 				else {
-					doc.lineWidth(pen.width.print).strokeColor(PALETTE[pen.tone]);
+					doc.lineWidth(pen.width.print * (look.widen?.[mk.role] ?? 1)).strokeColor(colours[pen.tone]);
 					if (mk.dashed ?? pen.dashed) doc.dash(pen.dash.print[0], { space: pen.dash.print[1] });
-					if (fill) doc.fillAndStroke(fill, PALETTE[pen.tone]);
+					if (fill) doc.fillAndStroke(fill, colours[pen.tone]);
 					else doc.stroke();
 				}
 			}

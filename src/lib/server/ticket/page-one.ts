@@ -36,7 +36,8 @@ export function header(doc: Doc, t: Ticket, f: Frame, origin: string): number {
 	const top = f.top;
 	const qr = 66;
 	drawQr(doc, workroomUrl(origin, t), f.right - qr + 4, top - 4, qr);
-	line(doc, 'Scan to open the order', f.right - qr / 2 + 4, top + qr + 3, { size: 6, align: 'center', color: PENCIL });
+	// The order page offers the full-size pattern files (tiled, roll, projector) and the lay.
+	line(doc, 'Scan: order and files', f.right - qr / 2 + 4, top + qr + 3, { size: 6, align: 'center', color: PENCIL });
 	line(doc, 'Cutting ticket', f.left, top + 8, { size: 9, weight: 600, color: PENCIL });
 	line(doc, t.number, f.left, top + 33, { size: 24, weight: 600 });
 	const skirt = t.line.count > 1 ? ` · skirt ${t.line.index} of ${t.line.count}` : '';
