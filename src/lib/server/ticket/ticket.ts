@@ -98,8 +98,14 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 	return a === b;
 }
 
-/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
-export function makeTicket(input: TicketInput): Ticket {
+/** Re-drafts an order line from its stored measurements and options, with the fabric's stretch and the
+ * order's house rules: the one draft every output of the line (ticket, DXF, full-scale prints) is made
+ * from. Throws DraftInputError when the stored input no longer drafts. */
+export function redraftLine(input: {
+	rules: TicketInput['rules'];
+	line: Pick<TicketInput['line'], 'measurements' | 'options'>;
+	fabric: Pick<TicketFabric, 'stretch'>;
+}): { given: GivenMeasurements; draft: Draft } {
 	const m = input.line.measurements;
 	const given: GivenMeasurements = {
 		waist: Number(m.waist),
@@ -115,7 +121,12 @@ export function makeTicket(input: TicketInput): Ticket {
 	};
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
 	const options = { stretch: input.fabric.stretch, ...input.line.options } as SkirtChoiceInput;
-	const draft = draftSkirt(measurements, options, input.rules);
+	return { given, draft: draftSkirt(measurements, options, input.rules) };
+}
+
+/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
+export function makeTicket(input: TicketInput): Ticket {
+	const { given, draft } = redraftLine(input);
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
 	try {

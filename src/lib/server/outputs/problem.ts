@@ -1,0 +1,21 @@
+// Why an output could not be made for an order, in words for the cutter, with the HTTP status the
+// routes answer with: 404 for an order (or a draft) that is not there, 422 for stored figures that no
+// longer draft (as the ticket answers). Anything else thrown while producing is a fault of ours.
+export class OutputProblem extends Error {
+	readonly status: 400 | 404 | 422;
+	constructor(status: 400 | 404 | 422, message: string) {
+		super(message);
+		this.name = 'OutputProblem';
+		this.status = status;
+	}
+}
+
+/** A JSON message with its status: what an output route answers instead of a file. */
+export const problemResponse = (p: OutputProblem) =>
+	new Response(JSON.stringify({ message: p.message }), {
+		status: p.status,
+		headers: { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'private, no-store' }
+	});
+
+/** A file name safe in a header and in a zip: letters, digits, dots and hyphens. */
+export const safeName = (s: string) => s.replace(/[^A-Za-z0-9.-]+/g, '-');
