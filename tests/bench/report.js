@@ -37,7 +37,7 @@ const notMeasured = (
 export function rowsFrom(raw) {
 	/** @type {Row[]} */
 	const rows = [];
-	const { draft, quote, ticket, checkout, pages } = raw;
+	const { draft, dxf, quote, ticket, checkout, pages, outputs } = raw;
 
 	if (isErr(draft)) rows.push(notMeasured('draft', 'draft: engine', draft?.error ?? 'failed', 'median < 1000 µs'));
 	else {
@@ -110,6 +110,58 @@ export function rowsFrom(raw) {
 				floorWhat: 'GET /healthz same load',
 				ratio: r3(quote.reqPerSec / f.reqPerSec),
 				notes: `floor: ${f.requests} requests, p50 ${r1(f.p50)} ms, ${codes(f)}; non-2xx ${f.non2xx}`
+			})
+		);
+	}
+
+	if (isErr(dxf)) rows.push(notMeasured('dxf', 'DXF: one order, in process', dxf?.error ?? 'failed', '< 50 ms'));
+	else
+		for (const [number, o] of Object.entries(dxf.orders)) {
+			const x = /** @type {any} */ (o);
+			rows.push(
+				row({
+					id: `dxf.${x.style}`,
+					measure: `DXF: one order, ${x.style} (draft + write)`,
+					unit: 'ms',
+					median: r1(x.total.median),
+					p95: r1(x.total.p95),
+					floor: r1(x.floor.median),
+					floorWhat: 'draftSkirt alone (median)',
+					ratio: r3(x.total.median / x.floor.median),
+					target: '< 50 ms',
+					met: x.total.median < 50,
+					notes: `${number}: ${x.pieces} pieces, ${Math.round(x.bytes / 1024)} KB; ${dxf.runs} runs, fastest ${r1(x.total.min)} ms`
+				})
+			);
+		}
+	if (isErr(outputs)) rows.push(notMeasured('outputs', 'outputs: DXF route and 20-order batch', outputs?.error ?? 'failed'));
+	else {
+		const { route, batch } = outputs;
+		rows.push(
+			row({
+				id: 'dxf.route',
+				measure: 'DXF: GET pattern.dxf as the cutter',
+				unit: 'ms',
+				median: r1(route.median),
+				p95: r1(route.p95),
+				floor: r1(route.floor.median),
+				floorWhat: 'GET /healthz (median)',
+				ratio: r3(route.median / route.floor.median),
+				target: '< 50 ms',
+				met: route.median < 50,
+				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB`
+			})
+		);
+		rows.push(
+			row({
+				id: 'jobs.batch20',
+				measure: `jobs: ${batch.orders}-order batch (ticket + DXF), app peak RSS`,
+				unit: 'MB',
+				median: r1(batch.peakMb),
+				floor: r1(batch.rssBeforeMb),
+				floorWhat: 'app RSS before the job',
+				ratio: r3(batch.peakMb / batch.rssBeforeMb),
+				notes: `${batch.peakFrom}; sampled peak ${r1(batch.sampledPeakMb)} MB; ${r1(batch.seconds)} s to done, zip ${Math.round(batch.zipBytes / 1024)} KB, ${batch.failures} orders not made`
 			})
 		);
 	}

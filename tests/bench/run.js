@@ -24,10 +24,10 @@ async function stopStack() {
 }
 onShutdown(stopStack);
 
-/** Runs the in-process engine measures in a child (TypeScript through tsx) and parses its JSON line. */
-function draftBench() {
+/** Runs in-process measures in a child (TypeScript through tsx) and parses its JSON line. */
+function draftBench(script = 'tests/bench/draft.ts') {
 	return new Promise((resolve, reject) => {
-		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], {
+		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', script], {
 			cwd: ROOT,
 			stdio: ['ignore', 'pipe', 'pipe']
 		});
@@ -39,11 +39,11 @@ function draftBench() {
 		child.on('close', (code) => {
 			clearTimeout(timer);
 			const line = out.trim().split('\n').at(-1) ?? '';
-			if (code !== 0) return reject(new Error(`tests/bench/draft.ts exited ${code}: ${err.slice(-2000)}`));
+			if (code !== 0) return reject(new Error(`${script} exited ${code}: ${err.slice(-2000)}`));
 			try {
 				resolve(JSON.parse(line));
 			} catch {
-				reject(new Error(`tests/bench/draft.ts printed no JSON: ${out.slice(-500)}`));
+				reject(new Error(`${script} printed no JSON: ${out.slice(-500)}`));
 			}
 		});
 	});
@@ -72,6 +72,7 @@ async function main() {
 	const { measureQuote } = await import('./http.js');
 	const { measureTicket, TICKET_ROUTE } = await import('./ticket.js');
 	const { measureCheckout } = await import('./checkout.js');
+	const { measureDxfRoute, measureBatch } = await import('./outputs.js');
 	const { measurePages, compareWithHtml } = await import('./pages.js');
 	const mysql = (await import('mysql2/promise')).default;
 
@@ -81,7 +82,8 @@ async function main() {
 	const env = s.testEnv;
 
 	// The engine alone first, while the app sits idle.
-	const draft = await measure('draft: in-process engine timings (tsx)', draftBench);
+	const draft = await measure('draft: in-process engine timings (tsx)', () => draftBench());
+	const dxf = await measure('DXF: one order drafted and written, in process (tsx)', () => draftBench('tests/bench/dxf.ts'));
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
@@ -134,7 +136,26 @@ async function main() {
 		})
 	);
 
-	const raw = { draft, quote, ticket, checkout, pages };
+	// After the checkout, so the database holds more than 20 orders to batch.
+	const outputs = await measure('outputs: GET pattern.dxf; a 20-order batch job (ticket + DXF) and the app\'s peak memory', async () => {
+		const db = await mysql.createConnection({ uri: env.DATABASE_URL });
+		try {
+			const [rows] = /** @type {any} */ (
+				await db.query('SELECT DISTINCT o.id, o.number FROM `order` o JOIN order_line l ON l.order_id = o.id ORDER BY o.id LIMIT 20')
+			);
+			const circle = /** @type {any} */ (await db.query("SELECT id FROM `order` WHERE number = 'QL-1007'"))[0][0];
+			const app = s.children.at(-1);
+			if (!app?.pid) throw new Error('the app process is not known');
+			return {
+				route: { number: 'QL-1007', ...(await measureDxfRoute({ appUrl: env.APP_URL, orderId: circle.id })) },
+				batch: await measureBatch({ appUrl: env.APP_URL, appPid: app.pid, orderIds: rows.map((/** @type {any} */ r) => r.id) })
+			};
+		} finally {
+			await db.end();
+		}
+	});
+
+	const raw = { draft, dxf, quote, ticket, checkout, pages, outputs };
 	const rows = rowsFrom(raw);
 	const report = {
 		startedAt: startedAt.toISOString(),
