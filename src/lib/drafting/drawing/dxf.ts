@@ -236,7 +236,8 @@ export function pieceText(p: Piece, orderNumber: string, line?: number): PieceTe
 	const small = cut?.size ?? nameSize * 0.62;
 	const angle = name?.angle ?? 0;
 	const rows: Omit<PieceText, 'at' | 'angle'>[] = [
-		{ text: `Piece Name: ${p.name}`, size: nameSize, layer: 'boundary' },
+		// As wide as the engine's name was sized to fit the piece: the standard's prefix makes it longer.
+		{ text: `Piece Name: ${p.name}`, size: nameSize * Math.min(1, (name?.text.length ?? 1) / `Piece Name: ${p.name}`.length), layer: 'boundary' },
 		{ text: `Quantity: ${p.cut.count}`, size: small, layer: 'boundary' },
 		{ text: p.fabric === 'lining' ? `${p.cutText}, lining fabric` : p.cutText, size: small, layer: 'annotation' },
 		{ text: `Order ${orderNumber}${line ? `, skirt ${line}` : ''}`, size: small, layer: 'annotation' },
