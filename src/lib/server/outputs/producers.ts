@@ -4,7 +4,7 @@
 import { DraftInputError } from '../../drafting';
 import type { Db } from '../db/client';
 import { siteOrigin } from '../origin';
-import { shopSettingsOf } from '../shop/rules';
+import { shopSettingsOf } from '../house/rules';
 import { loadTickets } from '../ticket/load';
 import { renderTickets } from '../ticket/pdf';
 import { produceDxf } from './dxf';

@@ -1,6 +1,6 @@
 import { env } from '$env/dynamic/private';
 import { db } from '../db';
-import { saveUpload } from '../storage';
+import { saveUpload } from '../catalogue/storage';
 import { drainJobs, requeueStale } from './jobs';
 
 // The job worker of this app process, started beside the mail outbox worker (hooks.server.ts). It wakes

@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { jobResultKey } from '$lib/server/outputs/jobs';
-import { readUpload } from '$lib/server/storage';
+import { readUpload } from '$lib/server/catalogue/storage';
 import type { RequestHandler } from './$types';
 
 // The finished job's files in one zip; 404 until it is done.
