@@ -20,8 +20,9 @@ const db = testDb();
 const run = async (cmd: string, args: string[], options: { cwd?: string; timeout?: number } = {}) => (await promisify(execFile)(cmd, args, { encoding: 'utf8', ...options })).stdout;
 const cookies: Record<'cutter' | 'owner' | 'shopper', string> = { cutter: '', owner: '', shopper: '' };
 const dir = mkdtempSync(join(tmpdir(), 'ql-dxf-'));
-// A straight skirt with lining, six gores with lining and pockets, a full circle (the demo seed).
-const SAMPLES = ['QL-1001', 'QL-1005', 'QL-1007'];
+// A straight skirt with pockets, six gores with lining and pockets, a full circle (the demo seed; not the
+// delivered orders, whose measurements another test may erase at the shopper's request).
+const SAMPLES = ['QL-1006', 'QL-1005', 'QL-1007'];
 let ids: Record<string, number> = {};
 let bad: Awaited<ReturnType<typeof makeBadOrders>>;
 
@@ -67,7 +68,7 @@ describe('the open DXF of an order', () => {
 	for (const number of SAMPLES) {
 		it(`${number}: ezdxf audits it clean and LibreCAD turns it into a PDF`, async () => {
 			const res = await get(`/workroom/orders/${ids[number]}/pattern.dxf`, cookies.cutter);
-			expect(res.status).toBe(200);
+			expect(res.status, res.status === 200 ? '' : await res.clone().text()).toBe(200);
 			expect(res.headers.get('content-type')).toBe('application/dxf');
 			expect(res.headers.get('content-disposition')).toBe(`attachment; filename="${number}-pattern.dxf"`);
 			expect(res.headers.get('cache-control')).toContain('no-store');
@@ -102,8 +103,9 @@ describe('the open DXF of an order', () => {
 	}
 
 	it('is for the workroom and the owner only', async () => {
-		const path = `/workroom/orders/${ids['QL-1001']}/pattern.dxf`;
-		expect((await get(path, cookies.owner)).status).toBe(200);
+		const path = `/workroom/orders/${ids['QL-1006']}/pattern.dxf`;
+		const owner = await get(path, cookies.owner);
+		expect(owner.status, owner.status === 200 ? '' : await owner.clone().text()).toBe(200);
 		expect((await get(path, cookies.shopper)).status).toBe(403);
 		const anonymous = await get(path);
 		expect(anonymous.status).toBe(303);

@@ -7,7 +7,7 @@ import type { testDb } from '../support/db';
 type Db = ReturnType<typeof testDb>;
 
 export async function makeBadOrders(db: Db, tag: string) {
-	const [base] = await db.select().from(orders).where(eq(orders.number, 'QL-1001'));
+	const [base] = await db.select().from(orders).where(eq(orders.number, 'QL-1006'));
 	const [line] = await db.select().from(orderLines).where(eq(orderLines.orderId, base.id));
 	const [style] = await db.select().from(styles).where(eq(styles.id, line.styleId));
 	const [{ id: retiredStyle }] = await db

@@ -26,6 +26,7 @@ export async function loadOrderDrafts(db: Db, orderId: number): Promise<OrderDra
 		.select({
 			measurements: orderLines.measurements,
 			options: orderLines.options,
+			adjustments: orderLines.adjustments,
 			styleName: styles.name,
 			retiredAt: styles.retiredAt,
 			stretch: fabrics.stretch
@@ -41,7 +42,7 @@ export async function loadOrderDrafts(db: Db, orderId: number): Promise<OrderDra
 		throw new OutputProblem(404, `Order ${order.number} is for the ${retired.styleName}, a style the atelier has retired: its pattern is no longer given out.`);
 	const lines = rows.map((r, i) => {
 		try {
-			const { draft } = redraftLine({ rules: order.rules, line: r, fabric: r });
+			const draft = redraftLine({ rules: order.rules, line: r, fabric: r });
 			return { index: i + 1, styleName: r.styleName, draft };
 		} catch (e) {
 			if (e instanceof DraftInputError) throw new OutputProblem(422, `Order ${order.number} cannot be drafted again: ${e.message}`);

@@ -1,18 +1,24 @@
-// Why an output could not be made for an order, in words for the cutter, with the HTTP status the
-// routes answer with: 404 for an order (or a draft) that is not there, 422 for stored figures that no
-// longer draft (as the ticket answers). Anything else thrown while producing is a fault of ours.
+// Why an output could not be made for an order, in the house's one failure shape ($lib/failure): 404 for
+// an order (or a draft) that is not there, 422 for stored figures that no longer draft (as the ticket
+// answers). Thrown, so a producer deep in the drafting can stop at once; anything else thrown while
+// producing is a fault of ours.
+import { failure, failureBody, type Failure } from '../../failure';
+
 export class OutputProblem extends Error {
-	readonly status: 400 | 404 | 422;
+	readonly failure: Failure;
 	constructor(status: 400 | 404 | 422, message: string) {
 		super(message);
 		this.name = 'OutputProblem';
-		this.status = status;
+		this.failure = failure(status, message);
+	}
+	get status() {
+		return this.failure.status;
 	}
 }
 
 /** A JSON message with its status: what an output route answers instead of a file. */
 export const problemResponse = (p: OutputProblem) =>
-	new Response(JSON.stringify({ message: p.message }), {
+	new Response(JSON.stringify(failureBody(p.failure)), {
 		status: p.status,
 		headers: { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'private, no-store' }
 	});
