@@ -11,14 +11,17 @@ import { throttleCredentials } from '$lib/server/hooks/throttle';
 import { handleUnavailableError, unavailable } from '$lib/server/hooks/unavailable';
 import { currentUser } from '$lib/server/hooks/user';
 import { startOutboxWorker, stopOutboxWorker } from '$lib/server/mail';
+import { startJobWorker, stopJobWorker } from '$lib/server/outputs/worker';
 import { pool } from '$lib/server/db';
 
 if (!building) {
 	startOutboxWorker();
+	startJobWorker();
 	// adapter-node emits this once the HTTP server has closed: the open database connections would
 	// otherwise keep the process alive after SIGTERM.
 	process.once('sveltekit:shutdown', () => {
 		stopOutboxWorker();
+		stopJobWorker();
 		void pool.end().catch(() => {});
 	});
 }

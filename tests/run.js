@@ -20,7 +20,7 @@ const wants = (/** @type {string} */ part) => only.length === 0 || only.includes
 
 async function main() {
 	ensurePackages();
-	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'], chromium: ['chromium'], pdftoppm: ['poppler-utils'] });
+	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'], chromium: ['chromium'], pdftoppm: ['poppler-utils'], ezdxf: ['python3-ezdxf'], librecad: ['librecad'], 'xvfb-run': ['xvfb', 'xauth'] });
 	// svelte-check first: it needs no running system and fails fastest.
 	if (wants('check')) {
 		step('svelte-check');
@@ -30,7 +30,7 @@ async function main() {
 	if (!['unit', 'integration', 'e2e'].some(wants)) return;
 	// Unit tests need no running system; the others get a whole one of their own.
 	// Mail retries fast in tests, so an outage test does not wait minutes.
-	if (wants('integration') || wants('e2e')) stack = await startStack({ name: 'test', quiet: !process.env.QL_TEST_APP_LOG, appEnv: { OUTBOX_INTERVAL_MS: '500', OUTBOX_RETRY_SCALE: '0.02' } });
+	if (wants('integration') || wants('e2e')) stack = await startStack({ name: 'test', quiet: !process.env.QL_TEST_APP_LOG, appEnv: { OUTBOX_INTERVAL_MS: '500', OUTBOX_RETRY_SCALE: '0.02', JOBS_INTERVAL_MS: '300' } });
 	const work = stack?.work ?? mkdtempSync(join(tmpdir(), 'quarterline-unit-'));
 	const testEnv = { ...stack?.testEnv, QL_TEST: '1' };
 

@@ -37,7 +37,7 @@ const notMeasured = (
 export function rowsFrom(raw) {
 	/** @type {Row[]} */
 	const rows = [];
-	const { draft, outputs, quote, ticket, checkout, pages, live } = raw;
+	const { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live } = raw;
 	rows.push(...outputRows(outputs));
 
 	if (isErr(draft)) rows.push(notMeasured('draft', 'draft: engine', draft?.error ?? 'failed', 'median < 1000 µs'));
@@ -111,6 +111,58 @@ export function rowsFrom(raw) {
 				floorWhat: 'GET /healthz same load',
 				ratio: r3(quote.reqPerSec / f.reqPerSec),
 				notes: `floor: ${f.requests} requests, p50 ${r1(f.p50)} ms, ${codes(f)}; non-2xx ${f.non2xx}`
+			})
+		);
+	}
+
+	if (isErr(dxf)) rows.push(notMeasured('dxf', 'DXF: one order, in process', dxf?.error ?? 'failed', '< 50 ms'));
+	else
+		for (const [number, o] of Object.entries(dxf.orders)) {
+			const x = /** @type {any} */ (o);
+			rows.push(
+				row({
+					id: `dxf.${x.style}`,
+					measure: `DXF: one order, ${x.style} (draft + write)`,
+					unit: 'ms',
+					median: r1(x.total.median),
+					p95: r1(x.total.p95),
+					floor: r1(x.floor.median),
+					floorWhat: 'draftSkirt alone (median)',
+					ratio: r3(x.total.median / x.floor.median),
+					target: '< 50 ms',
+					met: x.total.median < 50,
+					notes: `${number}: ${x.pieces} pieces, ${Math.round(x.bytes / 1024)} KB; ${dxf.runs} runs, fastest ${r1(x.total.min)} ms`
+				})
+			);
+		}
+	if (isErr(batch)) rows.push(notMeasured('outputs', 'outputs: DXF route and 20-order batch', batch?.error ?? 'failed'));
+	else {
+		const { route, batch: job } = batch;
+		rows.push(
+			row({
+				id: 'dxf.route',
+				measure: 'DXF: GET pattern.dxf as the cutter',
+				unit: 'ms',
+				median: r1(route.median),
+				p95: r1(route.p95),
+				floor: r1(route.floor.median),
+				floorWhat: 'GET /healthz (median)',
+				ratio: r3(route.median / route.floor.median),
+				target: '< 50 ms',
+				met: route.median < 50,
+				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB`
+			})
+		);
+		rows.push(
+			row({
+				id: 'jobs.batch20',
+				measure: `jobs: ${job.orders}-order batch (ticket + DXF), app peak RSS`,
+				unit: 'MB',
+				median: r1(job.peakMb),
+				floor: r1(job.rssBeforeMb),
+				floorWhat: 'app RSS before the job',
+				ratio: r3(job.peakMb / job.rssBeforeMb),
+				notes: `${job.peakFrom}; sampled peak ${r1(job.sampledPeakMb)} MB; ${r1(job.seconds)} s to done, zip ${Math.round(job.zipBytes / 1024)} KB, ${batch.failures} orders not made`
 			})
 		);
 	}

@@ -72,6 +72,7 @@ async function main() {
 	const { measureQuote } = await import('./http.js');
 	const { measureTicket, TICKET_ROUTE } = await import('./ticket.js');
 	const { measureCheckout } = await import('./checkout.js');
+	const { measureDxfRoute, measureBatch } = await import('./outputs.js');
 	const { measurePages, compareWithHtml } = await import('./pages.js');
 	const { measureLive } = await import('./live.js');
 	const mysql = (await import('mysql2/promise')).default;
@@ -84,6 +85,7 @@ async function main() {
 	// The engine alone first, while the app sits idle.
 	const draft = await measure('draft: in-process engine timings (tsx)', () => draftBench());
 	const outputs = await measure('outputs: full-size pattern PDFs, in process (tsx)', () => draftBench('tests/bench/outputs.ts'));
+	const dxf = await measure('DXF: one order drafted and written, in process (tsx)', () => draftBench('tests/bench/dxf.ts'));
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
@@ -140,7 +142,26 @@ async function main() {
 		})
 	);
 
-	const raw = { draft, outputs, quote, ticket, checkout, pages, live };
+	// After the checkout, so the database holds more than 20 orders to batch.
+	const batch = await measure('outputs: GET pattern.dxf; a 20-order batch job (ticket + DXF) and the app\'s peak memory', async () => {
+		const db = await mysql.createConnection({ uri: env.DATABASE_URL });
+		try {
+			const [rows] = /** @type {any} */ (
+				await db.query('SELECT DISTINCT o.id, o.number FROM `order` o JOIN order_line l ON l.order_id = o.id ORDER BY o.id LIMIT 20')
+			);
+			const circle = /** @type {any} */ (await db.query("SELECT id FROM `order` WHERE number = 'QL-1007'"))[0][0];
+			const app = s.children.at(-1);
+			if (!app?.pid) throw new Error('the app process is not known');
+			return {
+				route: { number: 'QL-1007', ...(await measureDxfRoute({ appUrl: env.APP_URL, orderId: circle.id })) },
+				batch: await measureBatch({ appUrl: env.APP_URL, appPid: app.pid, orderIds: rows.map((/** @type {any} */ r) => r.id) })
+			};
+		} finally {
+			await db.end();
+		}
+	});
+
+	const raw = { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live };
 	const rows = rowsFrom(raw);
 	const report = {
 		startedAt: startedAt.toISOString(),

@@ -385,3 +385,37 @@ export const outputPreferences = mysqlTable('output_preference', {
 	rollWidthCm: cm('roll_width_cm', 4),
 	updatedAt: updated()
 });
+// Files produced for many orders at once (a lay, a selection in the queue), made in the background by the
+// worker in src/lib/server/outputs/jobs.ts and kept as one zip in the upload store.
+export const OUTPUT_JOB_STATES = ['queued', 'running', 'done', 'failed'] as const;
+export type OutputJobState = (typeof OUTPUT_JOB_STATES)[number];
+/** An order the job could not produce, and why, in words for the cutter. */
+export type OutputJobFailure = { orderId: number; number: string | null; kind: string; message: string };
+
+export const outputJobs = mysqlTable(
+	'output_job',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		// The outputs to make for each order, by producer kind ('ticket', 'dxf', ...).
+		kinds: json('kinds').$type<string[]>().notNull(),
+		requestedBy: varchar('requested_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		orderIds: json('order_ids').$type<number[]>().notNull(),
+		status: mysqlEnum('status', OUTPUT_JOB_STATES).notNull().default('queued'),
+		done: int('done').notNull().default(0),
+		total: int('total').notNull(),
+		failures: json('failures').$type<OutputJobFailure[]>().notNull(),
+		// Why the whole job stopped (storage down...), beside the per-order failures.
+		error: varchar('error', { length: 500 }),
+		resultKey: varchar('result_key', { length: 64 }),
+		resultBytes: int('result_bytes'),
+		// Which worker holds it, and when it last said it was alive: a job whose worker died is queued again.
+		claimedBy: varchar('claimed_by', { length: 64 }),
+		attempts: int('attempts').notNull().default(0),
+		heartbeatAt: timestamp('heartbeat_at', { fsp: 3 }),
+		startedAt: timestamp('started_at', { fsp: 3 }),
+		finishedAt: timestamp('finished_at', { fsp: 3 }),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [index('output_job_status_idx').on(t.status, t.id), index('output_job_requester_idx').on(t.requestedBy)]
+);

@@ -91,15 +91,28 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 	return a === b;
 }
 
-/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
-export function makeTicket(input: TicketInput): Ticket {
+/** Re-drafts an order line from its stored measurements, options and fit adjustments, with the fabric's
+ * stretch and the order's house rules: the one draft every output of the line (ticket, DXF, full-scale
+ * prints) is made from. Throws DraftInputError when the stored input no longer drafts or was erased. */
+export function redraftLine(input: {
+	rules: TicketInput['rules'];
+	line: Pick<TicketInput['line'], 'measurements' | 'options' | 'adjustments'>;
+	fabric: Pick<TicketFabric, 'stretch'>;
+}): Draft {
 	const stored = draftInputOf({ measurements: input.line.measurements, options: input.line.options, adjustments: input.line.adjustments ?? null });
 	if (!stored || isErased(input.line.measurements)) {
 		throw new DraftInputError([{ field: 'measurements', message: 'Her measurements were erased at her request, so this line can no longer be drafted.' }]);
 	}
-	const given: GivenMeasurements = input.line.measurements;
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
-	const draft = draftSkirt(stored.measurements, { stretch: input.fabric.stretch, ...stored.choice }, input.rules);
+	return draftSkirt(stored.measurements, { stretch: input.fabric.stretch, ...stored.choice }, input.rules);
+}
+
+/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
+export function makeTicket(input: TicketInput): Ticket {
+	const draft = redraftLine(input);
+	// Never true here (redraftLine has refused erased figures); it tells the type checker so.
+	if (isErased(input.line.measurements)) throw new DraftInputError([{ field: 'measurements', message: 'Her measurements were erased.' }]);
+	const given: GivenMeasurements = input.line.measurements;
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
 	try {
