@@ -8,6 +8,7 @@ import { shopSettingsOf } from '../house/rules';
 import { loadTickets } from '../ticket/load';
 import { renderTickets } from '../ticket/pdf';
 import { produceDxf } from './dxf';
+import { produceLayPdf, producePatternPdf } from './index';
 import { OutputProblem, safeName } from './problem';
 import type { OutputFile } from './types';
 
@@ -31,8 +32,17 @@ async function produceTicket(db: Db, orderId: number): Promise<OutputFile> {
 /** Every producer by kind, in the order their files are listed. */
 export const PRODUCERS: Record<string, { label: string; produce: Producer }> = {
 	ticket: { label: 'Cutting ticket (PDF)', produce: produceTicket },
-	dxf: { label: 'Pattern for CAD and cutting tables (DXF)', produce: produceDxf }
+	dxf: { label: 'Pattern for CAD and cutting tables (DXF)', produce: produceDxf },
+	'pattern-a4': { label: 'Full-size pattern, tiled on A4 (PDF)', produce: (db, id) => pdfFile(producePatternPdf(id, { paper: 'a4' }, db)) },
+	'pattern-letter': { label: 'Full-size pattern, tiled on Letter (PDF)', produce: (db, id) => pdfFile(producePatternPdf(id, { paper: 'letter' }, db)) },
+	'pattern-roll': { label: 'Full-size pattern on the plotter roll (PDF)', produce: (db, id) => pdfFile(producePatternPdf(id, { paper: 'roll' }, db)) },
+	lay: { label: 'The lay at full size (PDF)', produce: (db, id) => pdfFile(produceLayPdf(id, db)) }
 };
+
+async function pdfFile(made: Promise<{ bytes: Uint8Array; filename: string }>): Promise<OutputFile> {
+	const { bytes, filename } = await made;
+	return { name: safeName(filename), mime: 'application/pdf', bytes };
+}
 
 export const OUTPUT_KINDS = Object.keys(PRODUCERS);
 export const isOutputKind = (k: string) => Object.hasOwn(PRODUCERS, k);
