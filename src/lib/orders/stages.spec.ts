@@ -13,7 +13,11 @@ const EXPECTED: Record<OrderStage, OrderStage[]> = {
 	shipped: ['delivered'],
 	delivered: [],
 	cancelled: [],
-	refunded: []
+	refunded: [],
+	// The alteration path: a fit decision sends a delivered order to awaiting_return (not a hand move),
+	// then the workroom marks it altering when the skirt arrives and shipped when it goes back.
+	awaiting_return: ['altering'],
+	altering: ['shipped']
 };
 
 describe('order stages', () => {

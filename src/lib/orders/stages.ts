@@ -8,7 +8,11 @@ export const ORDER_STAGES = [
 	'shipped',
 	'delivered',
 	'cancelled',
-	'refunded'
+	'refunded',
+	// The alteration path of a delivered skirt (a fit report decided as an alteration): it comes back,
+	// is altered, and is shipped and delivered again.
+	'awaiting_return',
+	'altering'
 ] as const;
 
 export type OrderStage = (typeof ORDER_STAGES)[number];
@@ -22,7 +26,9 @@ export const STAGE_LABELS: Record<OrderStage, string> = {
 	shipped: 'Shipped',
 	delivered: 'Delivered',
 	cancelled: 'Cancelled',
-	refunded: 'Refunded'
+	refunded: 'Refunded',
+	awaiting_return: 'Awaiting return for alteration',
+	altering: 'Altering'
 };
 
 /** The workroom's forward path; cancelled and refunded sit beside it. */
@@ -48,7 +54,10 @@ export const ALLOWED_MOVES: Record<OrderStage, readonly OrderStage[]> = {
 	shipped: ['delivered'],
 	delivered: [],
 	cancelled: [],
-	refunded: []
+	refunded: [],
+	// delivered → awaiting_return is made by a fit decision only (not a button); then by hand:
+	awaiting_return: ['altering'],
+	altering: ['shipped']
 };
 
 export function canMove(from: OrderStage, to: OrderStage): boolean {
@@ -56,4 +65,4 @@ export function canMove(from: OrderStage, to: OrderStage): boolean {
 }
 
 /** Stages in which an order still waits for the workroom (used for queue length and ship dates). */
-export const OPEN_WORK_STAGES: readonly OrderStage[] = ['paid', 'cutting', 'sewn', 'finished'];
+export const OPEN_WORK_STAGES: readonly OrderStage[] = ['paid', 'cutting', 'sewn', 'finished', 'altering'];

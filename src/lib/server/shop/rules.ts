@@ -28,7 +28,15 @@ export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
 	return rules;
 }
 
-export type ShopSettings = { currency: string; paperSize: 'A4' | 'Letter'; units: 'cm' | 'in'; shipping: ShippingRule; ordersPerDay: number; remakePolicy: string };
+export type ShopSettings = { currency: string; paperSize: 'A4' | 'Letter'; units: 'cm' | 'in'; shipping: ShippingRule; ordersPerDay: number;
+	remakePolicy: string;
+	/** Days after delivery within which she may report how it fits. */
+	remakeWindowDays: number;
+	/** Days her fit photos are kept before they are deleted on their own. */
+	photoRetentionDays: number;
+	/** Remakes at no charge for one order. */
+	freeRemakesPerOrder: number;
+};
 
 const DEFAULTS: ShopSettings = {
 	currency: 'EUR',
@@ -36,7 +44,10 @@ const DEFAULTS: ShopSettings = {
 	units: 'cm',
 	shipping: DEFAULT_SHIPPING,
 	ordersPerDay: 4,
-	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.'
+	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.',
+	remakeWindowDays: 30,
+	photoRetentionDays: 90,
+	freeRemakesPerOrder: 1
 };
 
 // Settings change rarely and nothing depends on seeing a change within seconds: each app server
@@ -44,8 +55,8 @@ const DEFAULTS: ShopSettings = {
 const SETTINGS_TTL_MS = 5_000;
 let cachedSettings: { at: number; value: ShopSettings } | null = null;
 
-export async function shopSettingsOf(db: Db): Promise<ShopSettings> {
-	if (cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
+export async function shopSettingsOf(db: Db, fresh = false): Promise<ShopSettings> {
+	if (!fresh && cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
 	const rows = await db.select().from(shopSettings).where(inArray(shopSettings.key, Object.keys(DEFAULTS)));
 	const value = { ...DEFAULTS, ...Object.fromEntries(rows.map((r) => [r.key, r.value])) } as ShopSettings;
 	cachedSettings = { at: Date.now(), value };
