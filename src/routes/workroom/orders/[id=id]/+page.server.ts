@@ -3,13 +3,14 @@ import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { moveFromForm } from '$lib/server/workroom/move-action';
 import { orderForWorkroom } from '$lib/server/workroom/order';
+import { remakeChanges } from '$lib/server/fit/workroom';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
 	requireRole(event, STAFF);
 	const found = await orderForWorkroom(db, Number(event.params.id));
 	if (!found) error(404, 'No such order.');
-	return found;
+	return { ...found, remake: await remakeChanges(db, found.order.id) };
 };
 
 export const actions: Actions = {
