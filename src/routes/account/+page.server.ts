@@ -3,12 +3,13 @@ import { and, desc, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { measurementProfiles, orders } from '$lib/server/db/schema';
 import { deleteMeasurements } from '$lib/server/shop/personal-data';
+import { cardHistory } from '$lib/server/fit/card';
 import type { Actions, PageServerLoad } from './$types';
 import { requireRole, SIGNED_IN } from '$lib/server/access';
 
 export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
-	const [cards, myOrders] = await Promise.all([
+	const [cards, myOrders, history] = await Promise.all([
 		db
 			.select({ id: measurementProfiles.id, name: measurementProfiles.name, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip })
 			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
@@ -17,9 +18,10 @@ export const load: PageServerLoad = async (event) => {
 			.from(orders)
 			.where(eq(orders.userId, userId))
 			.orderBy(desc(orders.createdAt))
-			.limit(5)
+			.limit(5),
+		cardHistory(db, userId)
 	]);
-	return { cards, orders: myOrders };
+	return { cards, orders: myOrders, history: history.map((h) => ({ ...h, at: h.at.toISOString() })) };
 };
 
 export const actions: Actions = {

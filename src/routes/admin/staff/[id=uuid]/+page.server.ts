@@ -24,6 +24,7 @@ export const load: PageServerLoad = async (event) => {
 			name: u.name,
 			email: u.email,
 			role: u.role,
+			fitDecider: u.fitDecider,
 			disabledAt: u.disabledAt,
 			createdAt: u.createdAt,
 			hasPassword: Boolean(u.passwordHash)
@@ -76,5 +77,14 @@ export const actions: Actions = {
 		if (!u.disabledAt) return kitFail(409, { problem: 'This account is switched on already.' });
 		await db.update(users).set({ disabledAt: null }).where(eq(users.id, u.id));
 		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
+	},
+	// Leave to open and decide fit reports (photos of a body, her figures): owners always have it.
+	fitLeave: async (event) => {
+		requireRole(event, OWNER);
+		const u = await accountFor(event.params.id);
+		if (u.role !== 'cutter') return kitFail(409, { problem: 'Only a cutter needs leave for fit reports: owners decide them anyway, shoppers never see them.' });
+		const allow = (await event.request.formData()).get('allow') === 'on';
+		await db.update(users).set({ fitDecider: allow }).where(eq(users.id, u.id));
+		return { notice: allow ? `${u.name ?? u.email} may now open and decide fit reports.` : `${u.name ?? u.email} no longer sees fit reports.` };
 	}
 };
