@@ -16,7 +16,7 @@ export const load: PageServerLoad = async (event) => {
 		db
 			.select({ total: sql<number>`COALESCE(SUM(${orders.total} - ${orders.refundedTotal}), 0)` })
 			.from(orders)
-			.where(sql`${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL 30 DAY)`)
+			.where(sql`${orders.kind} = 'order' AND ${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL 30 DAY)`)
 	]);
 	return { board, weeks, lowStock, staff, takings30: Number(takings[0]?.total ?? 0), overdue: board.reduce((s, b) => s + b.overdue, 0) };
 };
