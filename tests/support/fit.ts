@@ -6,6 +6,7 @@ import { testEnv } from './env';
 import type { Db } from '../../src/lib/server/db/client';
 import { fabrics, houseRules, measurementProfiles, orderEvents, orderLines, orders, styles, users } from '../../src/lib/server/db/schema';
 import { draftSkirt, estimateFabric, type StyleId } from '../../src/lib/drafting';
+import type { OrderStage } from '../../src/lib/orders/stages';
 
 const DAY = 86_400_000;
 
@@ -61,12 +62,12 @@ export async function deliveredOrder(db: Db, input: DeliveredInput = {}) {
 	await db.update(orders).set({ number }).where(eq(orders.id, id));
 	const [{ id: lineId }] = await db
 		.insert(orderLines)
-		.values({ orderId: id, styleId: style.id, fabricId: fabric.id, options: { ...choice }, measurements: m, figures: draft.figures as unknown as Record<string, unknown>, fabricCm, pricing: { total }, lineTotal: total })
+		.values({ orderId: id, styleId: style.id, fabricId: fabric.id, options: { ...choice }, measurements: m, figures: draft.figures, fabricCm, pricing: { fabric: 0, making: total, options: 0, total }, lineTotal: total })
 		.$returningId();
-	const path = ['paid', 'cutting', 'sewn', 'finished', 'shipped', ...(input.notDelivered ? [] : ['delivered'])] as const;
+	const path: OrderStage[] = ['paid', 'cutting', 'sewn', 'finished', 'shipped', ...(input.notDelivered ? [] : (['delivered'] as const))];
 	for (const [i, to] of path.entries()) {
 		const at = to === 'delivered' ? delivered : new Date(placed.getTime() + (i + 1) * DAY);
-		await db.insert(orderEvents).values({ orderId: id, actorLabel: to === 'cutting' ? 'Tomasz Weller' : 'Workroom', kind: 'stage', fromStatus: i ? path[i - 1] : 'awaiting_payment', toStatus: to, createdAt: at });
+		await db.insert(orderEvents).values({ orderId: id, actorLabel: to === 'cutting' ? 'Tomasz Weller' : 'Workroom', kind: 'stage', fromStatus: i ? path[i - 1] : ('awaiting_payment' as const), toStatus: to, createdAt: at });
 	}
 	let cardId: number | null = null;
 	if (input.card && user) {

@@ -60,8 +60,45 @@ export const ALLOWED_MOVES: Record<OrderStage, readonly OrderStage[]> = {
 	altering: ['shipped']
 };
 
-export function canMove(from: OrderStage, to: OrderStage): boolean {
-	return ALLOWED_MOVES[from].includes(to);
+// What the payment provider's events move: a paid checkout, and a refund of everything paid (from any
+// stage an order can have been paid in).
+export const PROVIDER_MOVES: Record<OrderStage, readonly OrderStage[]> = {
+	awaiting_payment: ['paid'],
+	paid: ['refunded'],
+	cutting: ['refunded'],
+	sewn: ['refunded'],
+	finished: ['refunded'],
+	shipped: ['refunded'],
+	delivered: ['refunded'],
+	cancelled: ['refunded'],
+	refunded: [],
+	awaiting_return: ['refunded'],
+	altering: ['refunded']
+};
+
+// What a fit decision moves: a delivered skirt comes back for an alteration (its own path).
+export const FIT_DECISION_MOVES: Record<OrderStage, readonly OrderStage[]> = {
+	awaiting_payment: [],
+	paid: [],
+	cutting: [],
+	sewn: [],
+	finished: [],
+	shipped: [],
+	delivered: ['awaiting_return'],
+	cancelled: [],
+	refunded: [],
+	awaiting_return: [],
+	altering: []
+};
+
+/** Who moves an order: a person in the workroom or back office, the payment provider's events, or a
+ * fit report's decision. */
+export type Mover = 'person' | 'provider' | 'fit-decision';
+
+const MOVES: Record<Mover, Record<OrderStage, readonly OrderStage[]>> = { person: ALLOWED_MOVES, provider: PROVIDER_MOVES, 'fit-decision': FIT_DECISION_MOVES };
+
+export function canMove(from: OrderStage, to: OrderStage, by: Mover = 'person'): boolean {
+	return MOVES[by][from].includes(to);
 }
 
 /** Stages in which an order still waits for the workroom (used for queue length and ship dates). */

@@ -2,7 +2,7 @@
 // reason and the report it came from. A guest has no card: her corrections are kept against the order.
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import type { Tx } from '../orders/stage';
+import type { Tx } from '../order/stage';
 import { measureCardChanges, measurementProfiles, orders, fitReports } from '../db/schema';
 import type { FitAdjustments } from '../../drafting/fit';
 import { CORRECTABLE, type CorrectableField } from '../../fit/report';
@@ -51,7 +51,7 @@ export function applyChanges(f: Figures, changes: Partial<Record<CorrectableFiel
  * Her card an order was drafted from: the signed-in shopper's card with the line's waist, hip and length,
  * or her most recently changed card. Null for a guest or a shopper without a card.
  */
-export async function cardFor(db: Reader, userId: string | null, m: Record<string, number | null>) {
+export async function cardFor(db: Reader, userId: string | null, m: { waist?: number | null; hip?: number | null; length?: number | null }) {
 	if (!userId) return null;
 	const cards = await db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt));
 	return cards.find((c) => c.waist === m.waist && c.hip === m.hip && c.length === m.length) ?? cards[0] ?? null;

@@ -6,14 +6,15 @@ import type { Db } from '../db/client';
 import { fitReports, orderEvents, orderLines, orders, styles, type FitCorrection } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { decisionMail } from '../mail/fit';
-import { moveOrder, MoveRefused, type Actor, type Tx } from '../orders/stage';
-import { quoteSkirt } from '../shop/quote';
-import { shopSettingsOf } from '../shop/rules';
+import { moveOrder, MoveRefused, type Actor, type Tx } from '../order/stage';
+import { quoteSkirt } from '../quote/quote';
+import { shopSettingsOf } from '../house/rules';
 import { formatDate } from '../../format';
 import { formatCm } from '../../drafting/units';
 import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
 import { changeWords, type CorrectableField } from '../../fit/report';
 import { applyChanges, correctCard, type Figures } from './card';
+import { isErased, type StoredMeasurements } from '../order/lines';
 import { fitLink } from './links';
 
 export type Decision = {
@@ -63,9 +64,11 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 		.where(eq(fitReports.id, d.reportId));
 	if (!head) return { ok: false, status: 404, message: 'No such fit report.' };
 	const { order, line } = head;
+	// Erased at her request (her data page): nothing to correct or draft again from.
+	if (isErased(line.measurements)) return { ok: false, status: 409, message: 'Her measurements for this order were erased at her request: ask her for them again before altering or remaking.' };
 	const changes = d.decision === 'decline' ? {} : d.changes;
 	// What changes against the first cut: the line's own figures, moved by the workroom's corrections.
-	const first: Figures = { measurements: line.measurements, adjustments: line.adjustments ?? null };
+	const first: Figures = { measurements: { ...line.measurements } as unknown as Figures['measurements'], adjustments: line.adjustments ?? null };
 	const { figures, list } = applyChanges(first, changes);
 	const corrections: FitCorrection[] = list.map((c) => ({ field: c.field, from: c.from, to: c.to }));
 	const words = corrections.map((c) => changeWords(c, formatCm));
@@ -88,18 +91,17 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 				orderId: order.id,
 				to: 'awaiting_return',
 				// A decision, not a hand move: the stage table offers no button for it.
-				system: true,
+				by: 'fit-decision',
 				actor: d.actor,
 				note: `Alteration after her fit report${words.length ? `: ${words.join('; ')}` : ''}`,
 				alongside: async (tx, locked) => {
-					if (locked.status !== 'delivered') throw new MoveRefused(409, 'Only a delivered order can come back for an alteration.');
 					await lockReport(tx, d.reportId);
-					await correctCard(tx, { userId: order.userId, lineMeasurements: line.measurements, changes, reason: why, reportId: d.reportId, orderId: order.id, by: d.actor.id });
+					await correctCard(tx, { userId: order.userId, lineMeasurements: first.measurements, changes, reason: why, reportId: d.reportId, orderId: order.id, by: d.actor.id });
 					await tx.update(fitReports).set({ status: 'decided', decision: 'alteration', reason: why, corrections, decidedBy: d.actor.id, decidedAt: d.now ?? new Date() }).where(eq(fitReports.id, d.reportId));
 					return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...decisionMail({ number: order.number, shopperName: order.shopperName, link, decision: 'alteration', reason: why, changes: words }) })];
 				}
 			});
-			if (!moved.ok) return moved;
+			if (!moved.ok) return { ok: false, status: moved.status === 404 ? 404 : 409, message: moved.message };
 			return { ok: true, remakeOrderId: null, remakeNumber: null, mailIds: moved.mailIds };
 		}
 
@@ -110,7 +112,7 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 			{ measurements: { ...figures.measurements, ...(figures.adjustments ? { adjustments: figures.adjustments } : {}) } as unknown as MeasurementsCm, style: head.styleSlug, options: options as ShopOptions, fabricId: line.fabricId, units: 'cm' },
 			{ drawing: false, now: d.now }
 		);
-		if (!q.ok) return { ok: false, status: q.problem.status === 404 ? 409 : 400, message: `The remake cannot be drafted with these corrections: ${q.problem.message}` };
+		if (!q.ok) return { ok: false, status: q.status === 404 ? 409 : 400, message: `The remake cannot be drafted with these corrections: ${q.message}` };
 		const settings = await shopSettingsOf(db, true);
 		const result = await db.transaction(async (tx) => {
 			const [locked] = await tx.select().from(orders).where(eq(orders.id, rootOf(order))).for('update');
@@ -147,17 +149,17 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 				styleId: line.styleId,
 				fabricId: line.fabricId,
 				options: line.options,
-				measurements: figures.measurements,
+				measurements: figures.measurements as unknown as StoredMeasurements,
 				adjustments: figures.adjustments,
 				figuresSource: line.figuresSource,
-				figures: q.draft.figures as unknown as Record<string, unknown>,
+				figures: q.line.draft.figures,
 				fabricCm: q.quote.fabric!.lengthCm,
 				pricing: { fabric: 0, making: 0, options: 0, total: 0 },
 				lineTotal: 0
 			});
 			await tx.insert(orderEvents).values({ orderId: id, actorId: d.actor.id, actorLabel: d.actor.label, kind: 'stage', fromStatus: null, toStatus: 'paid', note: `Remake of ${order.number}, no payment` });
 			await tx.insert(orderEvents).values({ orderId: order.id, actorId: d.actor.id, actorLabel: d.actor.label, kind: 'note', note: `Remake ordered as ${number}${words.length ? `: ${words.join('; ')}` : ''}` });
-			await correctCard(tx, { userId: order.userId, lineMeasurements: line.measurements, changes, reason: why, reportId: d.reportId, orderId: order.id, by: d.actor.id });
+			await correctCard(tx, { userId: order.userId, lineMeasurements: first.measurements, changes, reason: why, reportId: d.reportId, orderId: order.id, by: d.actor.id });
 			await tx.update(fitReports).set({ status: 'decided', decision: 'remake', reason: why, corrections, decidedBy: d.actor.id, decidedAt: d.now ?? new Date(), remakeOrderId: id }).where(eq(fitReports.id, d.reportId));
 			const mailId = await enqueueMail(tx, { to: order.email, orderId: order.id, ...decisionMail({ number: order.number, shopperName: order.shopperName, link, decision: 'remake', reason: why, changes: words, remakeNumber: number, promisedDate: formatDate(q.quote.shipBy) }) });
 			return { id, number, mailIds: [mailId] };

@@ -1,4 +1,4 @@
-import { orderToken } from '../orders/link';
+import { orderToken } from '../order/link';
 import { siteUrl } from '../origin';
 
 /** A signed link for her mail, from the configured origin: the order page, or one of its pages. */

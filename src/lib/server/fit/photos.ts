@@ -8,7 +8,7 @@ import { randomBytes } from 'node:crypto';
 import { and, asc, eq, lt } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fitPhotos } from '../db/schema';
-import { deleteUpload, readUpload, saveUpload } from '../storage';
+import { deleteUpload, readUpload, saveUpload } from '../catalogue/storage';
 
 export const PHOTO_LIMITS = { bytes: 10 * 1024 * 1024, side: 1600, pixels: 50_000_000, perReport: 4 } as const;
 

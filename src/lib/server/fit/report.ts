@@ -2,11 +2,11 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fitReports, orderEvents, orderLines, orders, styles, fabrics } from '../db/schema';
-import { checkOrderToken } from '../orders/link';
+import { checkOrderToken } from '../order/link';
 import { enqueueMail } from '../mail/outbox';
 import { reportReceivedMail } from '../mail/fit';
 import { mailSettings } from '../mail';
-import { shopSettingsOf } from '../shop/rules';
+import { shopSettingsOf } from '../house/rules';
 import { FIT_AREAS, FEELS, ZONES, type FitAnswers, type Feel } from '../../fit/report';
 import { keepPhoto, photosOf, PHOTO_LIMITS, type PreparedPhoto } from './photos';
 

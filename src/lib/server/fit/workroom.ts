@@ -5,7 +5,7 @@ import { desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, fitReports, orderLines, orders, styles, users } from '../db/schema';
 import { requireRole, STAFF } from '../access';
-import { shopSettingsOf } from '../shop/rules';
+import { shopSettingsOf } from '../house/rules';
 import { cardFor } from './card';
 import { photosOf, purgeExpiredPhotos } from './photos';
 import { remakesUsed } from './decide';

@@ -2,6 +2,7 @@
 // and options, drafted with the house rules the order was placed under, so a reprint never changes.
 // Body measurements are personal data (GDPR): the ticket carries the shopper's first name only and
 // just the four measurements the workroom drafts from.
+import { firstName } from '$lib/orders/names';
 import {
 	draftSkirt,
 	estimateFabric,
@@ -9,9 +10,10 @@ import {
 	type FabricEstimate,
 	type HouseRules,
 	type HouseRulesInput,
-	type Measurements,
-	type SkirtChoiceInput
+	DraftInputError,
+	type FitAdjustments
 } from '../../drafting';
+import { draftInputOf, isErased, type StoredChoice, type StoredLine, type StoredMeasurements } from '../order/lines';
 import type { OrderStage } from '../../orders/stages';
 
 /** The cloth as the workroom has it on the shelf. */
@@ -25,13 +27,8 @@ export interface TicketFabric {
 	shrinkagePct: number;
 }
 
-/** The measurements as the shopper gave them (cm); a missing waist-to-hip depth stays null. */
-export interface GivenMeasurements {
-	waist: number;
-	hip: number;
-	length: number;
-	waistToHip: number | null;
-}
+/** The measurements as the shopper gave them (cm); a missing depth stays null. */
+export type GivenMeasurements = StoredMeasurements;
 
 /** Everything one ticket (one order line) prints. */
 export interface Ticket {
@@ -70,17 +67,13 @@ export interface TicketInput {
 		index: number;
 		count: number;
 		styleName: string;
-		measurements: Record<string, number | null | undefined>;
-		options: Record<string, unknown>;
-		figures?: unknown;
+		measurements: StoredLine['measurements'];
+		options: StoredChoice;
+		adjustments?: FitAdjustments | null;
+		figures?: StoredLine['figures'] | null;
 		fabricCm?: number | null;
 	};
 	fabric: TicketFabric;
-}
-
-/** The first word of a name: all of the shopper the workroom needs to see. */
-export function firstNameOf(full: string): string {
-	return full.trim().split(/\s+/)[0] ?? '';
 }
 
 /** Two figure sets agree when every number is within half a millimetre (they are stored rounded to it). */
@@ -100,22 +93,13 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 
 /** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
 export function makeTicket(input: TicketInput): Ticket {
-	const m = input.line.measurements;
-	const given: GivenMeasurements = {
-		waist: Number(m.waist),
-		hip: Number(m.hip),
-		length: Number(m.length),
-		waistToHip: typeof m.waistToHip === 'number' ? m.waistToHip : null
-	};
-	const measurements: Measurements = {
-		waist: given.waist,
-		hip: given.hip,
-		length: given.length,
-		...(given.waistToHip === null ? {} : { waistToHip: given.waistToHip })
-	};
+	const stored = draftInputOf({ measurements: input.line.measurements, options: input.line.options, adjustments: input.line.adjustments ?? null });
+	if (!stored || isErased(input.line.measurements)) {
+		throw new DraftInputError([{ field: 'measurements', message: 'Her measurements were erased at her request, so this line can no longer be drafted.' }]);
+	}
+	const given: GivenMeasurements = input.line.measurements;
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
-	const options = { stretch: input.fabric.stretch, ...input.line.options } as SkirtChoiceInput;
-	const draft = draftSkirt(measurements, options, input.rules);
+	const draft = draftSkirt(stored.measurements, { stretch: input.fabric.stretch, ...stored.choice }, input.rules);
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
 	try {
@@ -130,7 +114,7 @@ export function makeTicket(input: TicketInput): Ticket {
 	return {
 		orderId: input.orderId,
 		number: input.number,
-		firstName: firstNameOf(input.shopperName),
+		firstName: firstName(input.shopperName),
 		status: input.status,
 		promisedDate: input.promisedDate,
 		houseRulesId: input.houseRulesId,

@@ -1,11 +1,11 @@
 import { fail } from '@sveltejs/kit';
 import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
-import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/admin/rules-form';
+import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
 import { houseRules, users } from '$lib/server/db/schema';
-import { currentRules } from '$lib/server/shop/rules';
-import { sampleDrawing } from '$lib/server/shop/sample';
+import { currentRules } from '$lib/server/house/rules';
+import { sampleDrawing } from '$lib/server/quote/sample';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
@@ -41,7 +41,7 @@ export const actions: Actions = {
 		}
 		if (!note) return fail(400, { message: 'Say in a few words what changed and why: the note stays with every order drafted with these rules.', errors: {} });
 		// A new version: orders already placed keep the rules they were drafted with.
-		const [{ id }] = await db.insert(houseRules).values({ rules: rules as unknown as Record<string, unknown>, note, createdBy: user.id }).$returningId();
+		const [{ id }] = await db.insert(houseRules).values({ rules, note, createdBy: user.id }).$returningId();
 		return { message: `Saved as version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };

@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
-import { checkOrderToken } from '$lib/server/orders/link';
+import { checkOrderToken } from '$lib/server/order/link';
 import { orderOfReport } from '$lib/server/fit/report';
 import { photoBytes } from '$lib/server/fit/photos';
 import type { RequestHandler } from './$types';
