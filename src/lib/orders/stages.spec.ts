@@ -36,4 +36,10 @@ describe('order stages', () => {
 			expect(ALLOWED_MOVES[from]).not.toContain('awaiting_payment');
 		}
 	});
+
+	it('lets a fit decision send only a delivered order back for an alteration', () => {
+		for (const from of ORDER_STAGES) {
+			for (const to of ORDER_STAGES) expect(canMove(from, to, 'fit-decision')).toBe(from === 'delivered' && to === 'awaiting_return');
+		}
+	});
 });
