@@ -62,6 +62,7 @@ export function appEnv(c, databaseUrl) {
 		SMTP_HOST: '127.0.0.1',
 		SMTP_PORT: String(c.smtpPort),
 		UPLOAD_DIR: c.uploadDir,
-		BODY_SIZE_LIMIT: '6M'
+		// A fit photo is up to 10 MB, sent one to a request (the largest body the shop takes); swatches are 5 MB.
+		BODY_SIZE_LIMIT: '11M'
 	};
 }

@@ -21,7 +21,7 @@ const ticket = makeTicket({
 	promisedDate: '2026-12-20',
 	houseRulesId: 1,
 	rules: resolveRules({}),
-	line: { id: 1, index: 1, count: 1, styleName: 'Carousel full-circle skirt', measurements: { waist: 64, hip: 88, length: 55, waistToHip: 18 }, options: { style: 'full-circle' } },
+	line: { id: 1, index: 1, count: 1, styleName: 'Carousel full-circle skirt', measurements: { waist: 64, hip: 88, length: 55, waistToHip: 18 }, options: { style: 'full-circle', stretch: false } },
 	fabric: { name: 'Ink viscose crepe', colour: 'Ink', fibreContent: '100 % viscose', widthCm: 140, nap: false, stretch: false, shrinkagePct: 0 }
 });
 const src = sourceOf([ticket]);

@@ -72,7 +72,7 @@ async function main() {
 	const { measureQuote } = await import('./http.js');
 	const { measureTicket, TICKET_ROUTE } = await import('./ticket.js');
 	const { measureCheckout } = await import('./checkout.js');
-	const { measureDxfRoute, measureBatch } = await import('./outputs.js');
+	const { measureDxfRoute, measureBatch } = await import('./jobs.js');
 	const { measurePages, compareWithHtml } = await import('./pages.js');
 	const { measureLive } = await import('./live.js');
 	const mysql = (await import('mysql2/promise')).default;

@@ -15,6 +15,8 @@ type Audience = 'anonymous' | 'shopper' | 'cutter' | 'owner';
 const AUDIENCES: Audience[] = ['anonymous', 'shopper', 'cutter', 'owner'];
 const WHO: { prefix: string; allowed: Audience[] }[] = [
 	{ prefix: '/admin', allowed: ['owner'] },
+	// Fit reports carry photos of a body: the owner, and cutters she allows (the demo cutter is not).
+	{ prefix: '/workroom/fit-reports', allowed: ['owner'] },
 	{ prefix: '/api/admin', allowed: ['owner'] },
 	{ prefix: '/workroom', allowed: ['cutter', 'owner'] },
 	{ prefix: '/api/workroom', allowed: ['cutter', 'owner'] },
@@ -40,8 +42,8 @@ beforeAll(async () => {
 	const [cutter] = await db.select({ id: users.id }).from(users).where(eq(users.email, DEMO_SIGN_INS.accounts.find((a) => a.role === 'cutter')!.email));
 	// Real records for reading; records that do not exist for posting, so a permitted action
 	// exercises its checks without changing the demo data other tests read.
-	real = { 'id=id': '1', 'id=uuid': cutter.id, 'number=number': 'QL-1001', 'slug=slug': 'rue-straight' };
-	absent = { 'id=id': '2147483647', 'id=uuid': '00000000-0000-4000-8000-000000000000', 'number=number': 'QL-99999999', 'slug=slug': 'no-such-style' };
+	real = { 'id=photo': 'x'.repeat(43), 'id=id': '1', 'id=uuid': cutter.id, 'number=number': 'QL-1001', 'slug=slug': 'rue-straight' };
+	absent = { 'id=photo': 'y'.repeat(43), 'id=id': '2147483647', 'id=uuid': '00000000-0000-4000-8000-000000000000', 'number=number': 'QL-99999999', 'slug=slug': 'no-such-style' };
 });
 
 function headers(audience: Audience, extra: Record<string, string> = {}) {
@@ -70,7 +72,7 @@ describe('the route walk', () => {
 	it('finds the routes in the file tree', () => {
 		expect(routes.length).toBeGreaterThan(35);
 		expect(routes.map((r) => r.id)).toContain('/admin/orders.csv');
-		expect(routes.find((r) => r.id === '/admin/staff/[id=uuid]')?.actions).toEqual(['role', 'disable', 'enable']);
+		expect(routes.find((r) => r.id === '/admin/staff/[id=uuid]')?.actions).toEqual(['role', 'disable', 'enable', 'fitLeave']);
 	});
 
 	it('changes nothing in MariaDB while refused audiences try every route and action', async () => {

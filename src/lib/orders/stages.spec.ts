@@ -13,7 +13,11 @@ const EXPECTED: Record<OrderStage, OrderStage[]> = {
 	shipped: ['delivered'],
 	delivered: [],
 	cancelled: [],
-	refunded: []
+	refunded: [],
+	// The alteration path: a fit decision sends a delivered order to awaiting_return (not a hand move),
+	// then the workroom marks it altering when the skirt arrives and shipped when it goes back.
+	awaiting_return: ['altering'],
+	altering: ['shipped']
 };
 
 describe('order stages', () => {
@@ -30,6 +34,12 @@ describe('order stages', () => {
 		for (const from of ORDER_STAGES) {
 			expect(ALLOWED_MOVES[from]).not.toContain(from);
 			expect(ALLOWED_MOVES[from]).not.toContain('awaiting_payment');
+		}
+	});
+
+	it('lets a fit decision send only a delivered order back for an alteration', () => {
+		for (const from of ORDER_STAGES) {
+			for (const to of ORDER_STAGES) expect(canMove(from, to, 'fit-decision')).toBe(from === 'delivered' && to === 'awaiting_return');
 		}
 	});
 });

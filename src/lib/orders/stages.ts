@@ -8,7 +8,11 @@ export const ORDER_STAGES = [
 	'shipped',
 	'delivered',
 	'cancelled',
-	'refunded'
+	'refunded',
+	// The alteration path of a delivered skirt (a fit report decided as an alteration): it comes back,
+	// is altered, and is shipped and delivered again.
+	'awaiting_return',
+	'altering'
 ] as const;
 
 export type OrderStage = (typeof ORDER_STAGES)[number];
@@ -22,7 +26,9 @@ export const STAGE_LABELS: Record<OrderStage, string> = {
 	shipped: 'Shipped',
 	delivered: 'Delivered',
 	cancelled: 'Cancelled',
-	refunded: 'Refunded'
+	refunded: 'Refunded',
+	awaiting_return: 'Awaiting return for alteration',
+	altering: 'Altering'
 };
 
 /** The workroom's forward path; cancelled and refunded sit beside it. */
@@ -48,7 +54,10 @@ export const ALLOWED_MOVES: Record<OrderStage, readonly OrderStage[]> = {
 	shipped: ['delivered'],
 	delivered: [],
 	cancelled: [],
-	refunded: []
+	refunded: [],
+	// delivered → awaiting_return is made by a fit decision only (not a button); then by hand:
+	awaiting_return: ['altering'],
+	altering: ['shipped']
 };
 
 // What the payment provider's events move: a paid checkout, and a refund of everything paid (from any
@@ -62,15 +71,35 @@ export const PROVIDER_MOVES: Record<OrderStage, readonly OrderStage[]> = {
 	shipped: ['refunded'],
 	delivered: ['refunded'],
 	cancelled: ['refunded'],
-	refunded: []
+	refunded: [],
+	awaiting_return: ['refunded'],
+	altering: ['refunded']
 };
 
-/** Who moves an order: a person in the workroom or back office, or the payment provider's events. */
-export type Mover = 'person' | 'provider';
+// What a fit decision moves: a delivered skirt comes back for an alteration (its own path).
+export const FIT_DECISION_MOVES: Record<OrderStage, readonly OrderStage[]> = {
+	awaiting_payment: [],
+	paid: [],
+	cutting: [],
+	sewn: [],
+	finished: [],
+	shipped: [],
+	delivered: ['awaiting_return'],
+	cancelled: [],
+	refunded: [],
+	awaiting_return: [],
+	altering: []
+};
+
+/** Who moves an order: a person in the workroom or back office, the payment provider's events, or a
+ * fit report's decision. */
+export type Mover = 'person' | 'provider' | 'fit-decision';
+
+const MOVES: Record<Mover, Record<OrderStage, readonly OrderStage[]>> = { person: ALLOWED_MOVES, provider: PROVIDER_MOVES, 'fit-decision': FIT_DECISION_MOVES };
 
 export function canMove(from: OrderStage, to: OrderStage, by: Mover = 'person'): boolean {
-	return (by === 'provider' ? PROVIDER_MOVES : ALLOWED_MOVES)[from].includes(to);
+	return MOVES[by][from].includes(to);
 }
 
 /** Stages in which an order still waits for the workroom (used for queue length and ship dates). */
-export const OPEN_WORK_STAGES: readonly OrderStage[] = ['paid', 'cutting', 'sewn', 'finished'];
+export const OPEN_WORK_STAGES: readonly OrderStage[] = ['paid', 'cutting', 'sewn', 'finished', 'altering'];

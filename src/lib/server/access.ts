@@ -15,6 +15,9 @@ export const OWNER: readonly Role[] = ['owner'];
 export const AREAS: readonly Area[] = [
 	{ route: '/admin', roles: OWNER, label: 'the back office' },
 	{ route: '/api/admin', roles: OWNER, label: 'the back office' },
+	// Fit reports sit in the workroom; beyond the role, their loads and actions ask for the owner's leave
+	// (requireFitDecider in server/fit/workroom.ts).
+	{ route: '/workroom/fit-reports', roles: STAFF, label: 'the fit reports' },
 	{ route: '/workroom', roles: STAFF, label: 'the workroom' },
 	{ route: '/api/workroom', roles: STAFF, label: 'the workroom' },
 	{ route: '/account', roles: SIGNED_IN, label: 'your account' }
@@ -22,7 +25,8 @@ export const AREAS: readonly Area[] = [
 
 // Pages that show one person's orders, measurements or contact details: never kept by a shared cache
 // or the browser's back-forward store.
-const PERSONAL = ['/admin', '/api/admin', '/workroom', '/api/workroom', '/account', '/orders', '/api/orders', '/checkout'];
+// Fit photos (/fit-photos) are checked per request like an order page: her account, her signed link, or staff.
+const PERSONAL = ['/admin', '/api/admin', '/workroom', '/api/workroom', '/account', '/orders', '/api/orders', '/checkout', '/fit-photos'];
 
 /** The route id without its (group) folders, which do not appear in URLs. */
 function plain(routeId: string) {

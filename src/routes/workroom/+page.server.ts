@@ -7,6 +7,6 @@ import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
 	requireRole(event, STAFF);
-	const [counts, lowStock, overdue, queue] = await Promise.all([stageCounts(db), lowStockFabrics(db), overdueCount(db), workQueue(db)]);
+	const [counts, lowStock, overdue, queue] = await Promise.all([stageCounts(db), lowStockFabrics(db), overdueCount(db), workQueue(db, ['paid', 'altering'])]);
 	return { counts: counts.filter((c) => OPEN_WORK_STAGES.includes(c.stage)), lowStock, overdue, queue };
 };

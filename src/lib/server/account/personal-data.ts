@@ -1,6 +1,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { measurementProfiles, orderLines, orders, users } from '../db/schema';
+import { fitPhotos, fitReports, measureCardChanges, measurementProfiles, orderLines, orders, users } from '../db/schema';
+import { deleteUpload } from '../catalogue/storage';
 import { ERASED } from '../order/lines';
 
 // Orders still in the workroom need the measurements to be cut and sewn; once an order is
@@ -13,8 +14,12 @@ export async function exportPersonalData(db: Db, userId: string) {
 	const cards = await db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, userId));
 	const myOrders = await db.select().from(orders).where(eq(orders.userId, userId));
 	const lines = myOrders.length ? await db.select().from(orderLines).where(inArray(orderLines.orderId, myOrders.map((o) => o.id))) : [];
+	const reports = myOrders.length ? await db.select().from(fitReports).where(inArray(fitReports.orderId, myOrders.map((o) => o.id))) : [];
+	const changes = await db.select().from(measureCardChanges).where(eq(measureCardChanges.userId, userId));
 	return {
 		exportedAt: new Date().toISOString(),
+		fitReports: reports.map((r) => ({ order: myOrders.find((o) => o.id === r.orderId)?.number, answers: r.answers, marks: r.marks, note: r.note, wish: r.wish, decision: r.decision, reason: r.reason, corrections: r.corrections, sentAt: r.createdAt })),
+		measureCardChanges: changes.map((c) => ({ field: c.field, fromCm: c.fromCm, toCm: c.toCm, reason: c.reason, at: c.createdAt })),
 		account: user,
 		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, waistToKneeCm: c.waistToKnee, fitAdjustmentsCm: c.adjustments, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
 		orders: myOrders.map((o) => ({
@@ -31,6 +36,18 @@ export async function exportPersonalData(db: Db, userId: string) {
 
 /** Deletes her measure cards and the measurements of her finished orders; says what it kept and why. */
 export async function deleteMeasurements(db: Db, userId: string) {
+	// Her fit photos go too (body photos are measurements of a kind), and the history of her cards' corrections.
+	const photos = await db
+		.select({ id: fitPhotos.id, key: fitPhotos.storageKey })
+		.from(fitPhotos)
+		.innerJoin(fitReports, eq(fitReports.id, fitPhotos.reportId))
+		.innerJoin(orders, eq(orders.id, fitReports.orderId))
+		.where(eq(orders.userId, userId));
+	for (const p of photos) {
+		await db.delete(fitPhotos).where(eq(fitPhotos.id, p.id));
+		await deleteUpload(p.key).catch(() => {});
+	}
+	await db.delete(measureCardChanges).where(eq(measureCardChanges.userId, userId));
 	return db.transaction(async (tx) => {
 		const [{ affectedRows: cards }] = await tx.delete(measurementProfiles).where(eq(measurementProfiles.userId, userId));
 		const mine = await tx.select({ id: orders.id, status: orders.status }).from(orders).where(eq(orders.userId, userId));

@@ -68,3 +68,8 @@ export async function switchOff(db: Db, u: { id: string; email: string | null })
 export async function switchOn(db: Db, id: string) {
 	await db.update(users).set({ disabledAt: null }).where(eq(users.id, id));
 }
+
+/** Leave for a cutter to open and decide fit reports (photos of a body, her figures); owners always have it. */
+export async function setFitLeave(db: Db, id: string, allow: boolean) {
+	await db.update(users).set({ fitDecider: allow }).where(eq(users.id, id));
+}

@@ -16,6 +16,7 @@ import {
 import { sql } from 'drizzle-orm';
 import { ORDER_STAGES } from '../../orders/stages';
 import type { FitAdjustments } from '../../drafting/fit';
+import type { FitAnswers } from '../../fit/report';
 import type { Figures } from '../../drafting/block';
 import type { HouseRulesInput } from '../../drafting/rules';
 import type { StyleId } from '../../drafting/options';
@@ -60,6 +61,8 @@ export const users = mysqlTable('user', {
 	// Carried in the session cookie and compared on every request: raising it (sign-out, switching the
 	// account off, a new password) ends every session of this person at once, on every app server.
 	sessionVersion: int('session_version').notNull().default(0),
+	// A cutter the owner allows to decide fit reports (alteration, remake, decline); owners always may.
+	fitDecider: boolean('fit_decider').notNull().default(false),
 	createdAt: created(),
 	updatedAt: updated()
 });
@@ -239,6 +242,8 @@ export type ShippingAddress = {
 	country: string;
 };
 
+export const ORDER_KINDS = ['order', 'remake'] as const;
+
 export const orders = mysqlTable(
 	'order',
 	{
@@ -263,12 +268,16 @@ export const orders = mysqlTable(
 		houseRulesId: int('house_rules_id')
 			.notNull()
 			.references(() => houseRules.id),
+		// A remake is a new order for the same skirt, cut again after a fit report: no payment, never takings.
+		kind: mysqlEnum('kind', ORDER_KINDS).notNull().default('order'),
+		remakeOfId: int('remake_of_id'),
 		paidAt: timestamp('paid_at', { fsp: 3 }),
 		createdAt: created(),
 		updatedAt: updated()
 	},
 	(t) => [
 		index('order_status_idx').on(t.status, t.promisedDate),
+		index('order_remake_of_idx').on(t.remakeOfId),
 		index('order_user_idx').on(t.userId),
 		index('order_created_idx').on(t.createdAt),
 		index('order_rules_idx').on(t.houseRulesId)
@@ -418,4 +427,81 @@ export const outputJobs = mysqlTable(
 		updatedAt: updated()
 	},
 	(t) => [index('output_job_status_idx').on(t.status, t.id), index('output_job_requester_idx').on(t.requestedBy)]
+);
+
+// ---- The fit loop: her report on a delivered skirt, its photos, and the corrections on her measure card.
+
+/** One correction the workroom decided: a measurement or an adjustment, with its change in cm. */
+export type FitCorrection = { field: string; from: number | null; to: number | null };
+
+export const fitReports = mysqlTable(
+	'fit_report',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		orderId: int('order_id')
+			.notNull()
+			.references(() => orders.id, { onDelete: 'cascade' }),
+		// One report per skirt: a second word on the same skirt goes to the atelier by mail.
+		orderLineId: int('order_line_id')
+			.notNull()
+			.unique()
+			.references(() => orderLines.id, { onDelete: 'cascade' }),
+		answers: json('answers').$type<FitAnswers>().notNull(),
+		// Where it pulls or gapes: ids of the zones she touched on the drawing of her skirt.
+		marks: json('marks').$type<string[]>().notNull(),
+		note: text('note'),
+		units: mysqlEnum('units', ['cm', 'in']).notNull().default('cm'),
+		wish: mysqlEnum('wish', ['alteration', 'remake']).notNull(),
+		status: mysqlEnum('status', ['new', 'waiting', 'decided']).notNull().default('new'),
+		decision: mysqlEnum('decision', ['alteration', 'remake', 'decline']),
+		reason: text('reason'),
+		corrections: json('corrections').$type<FitCorrection[]>(),
+		decidedBy: varchar('decided_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		decidedAt: timestamp('decided_at', { fsp: 3 }),
+		remakeOrderId: int('remake_order_id'),
+		createdAt: created(),
+		updatedAt: updated()
+	},
+	(t) => [index('fit_report_status_idx').on(t.status, t.createdAt), index('fit_report_order_idx').on(t.orderId)]
+);
+
+// Photos of a body are sensitive: never public. Each is served by its random id to her and the staff only,
+// kept for the shop's retention days, and deleted (row and file) when she asks.
+export const fitPhotos = mysqlTable(
+	'fit_photo',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		publicId: varchar('public_id', { length: 43 }).notNull().unique(),
+		reportId: int('report_id')
+			.notNull()
+			.references(() => fitReports.id, { onDelete: 'cascade' }),
+		storageKey: varchar('storage_key', { length: 255 }).notNull().unique(),
+		mime: varchar('mime', { length: 80 }).notNull(),
+		bytes: int('bytes').notNull(),
+		width: int('width').notNull(),
+		height: int('height').notNull(),
+		consentAt: timestamp('consent_at', { fsp: 3 }).notNull(),
+		createdAt: created()
+	},
+	(t) => [index('fit_photo_report_idx').on(t.reportId), index('fit_photo_created_idx').on(t.createdAt)]
+);
+
+// Every correction the atelier makes to a measure card (or, for a guest, to the figures of her order),
+// with its reason and the report it came from.
+export const measureCardChanges = mysqlTable(
+	'measure_card_change',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		profileId: int('profile_id').references(() => measurementProfiles.id, { onDelete: 'cascade' }),
+		userId: varchar('user_id', { length: 255 }).references(() => users.id, { onDelete: 'cascade' }),
+		field: varchar('field', { length: 40 }).notNull(),
+		fromCm: cm('from_cm', 6),
+		toCm: cm('to_cm', 6),
+		reason: varchar('reason', { length: 500 }).notNull(),
+		reportId: int('report_id').references(() => fitReports.id, { onDelete: 'set null' }),
+		orderId: int('order_id').references(() => orders.id, { onDelete: 'set null' }),
+		changedBy: varchar('changed_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		createdAt: created()
+	},
+	(t) => [index('measure_card_change_profile_idx').on(t.profileId, t.createdAt), index('measure_card_change_user_idx').on(t.userId)]
 );

@@ -37,6 +37,12 @@ export type ShopSettings = {
 	remakePolicy: string;
 	/** The workroom plotter's roll width (cm), the default width of a full-size pattern on a roll. */
 	plotterWidthCm: number;
+	/** Days after delivery within which she may report how it fits. */
+	remakeWindowDays: number;
+	/** Days her fit photos are kept before they are deleted on their own. */
+	photoRetentionDays: number;
+	/** Remakes at no charge for one order. */
+	freeRemakesPerOrder: number;
 };
 
 const DEFAULTS: ShopSettings = {
@@ -47,7 +53,10 @@ const DEFAULTS: ShopSettings = {
 	ordersPerDay: 4,
 	// A 36 in roll, the common plotter width (91.4 cm).
 	plotterWidthCm: 91.4,
-	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.'
+	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.',
+	remakeWindowDays: 30,
+	photoRetentionDays: 90,
+	freeRemakesPerOrder: 1
 };
 
 // Settings change rarely and nothing depends on seeing a change within seconds: each app server
@@ -55,8 +64,8 @@ const DEFAULTS: ShopSettings = {
 const SETTINGS_TTL_MS = 5_000;
 let cachedSettings: { at: number; value: ShopSettings } | null = null;
 
-export async function shopSettingsOf(db: Db): Promise<ShopSettings> {
-	if (cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
+export async function shopSettingsOf(db: Db, fresh = false): Promise<ShopSettings> {
+	if (!fresh && cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
 	const rows = await db.select().from(shopSettings).where(inArray(shopSettings.key, Object.keys(DEFAULTS)));
 	const value = { ...DEFAULTS, ...Object.fromEntries(rows.map((r) => [r.key, r.value])) } as ShopSettings;
 	cachedSettings = { at: Date.now(), value };

@@ -1,9 +1,11 @@
 import { eq, inArray, sql } from 'drizzle-orm';
 import Stripe from 'stripe';
 import type { Db } from '../db/client';
-import { fabrics, orderLines } from '../db/schema';
+import { fabrics, orderLines, orders } from '../db/schema';
 import { enqueueMail } from '../mail/outbox';
 import { shippedMail } from '../mail/templates';
+import { remakeShippedMail } from '../mail/fit';
+import { fitLink } from '../fit/links';
 import { moveOrder, MoveRefused, type Actor } from './stage';
 import { orderSummary } from './summary';
 import { closeOpenSessions } from './payments/sessions';
@@ -61,6 +63,11 @@ export async function workroomMove(db: Db, req: StageRequest) {
 					}
 					await tx.update(fabrics).set({ stockCm: sql`${fabrics.stockCm} - ${cm}` }).where(eq(fabrics.id, f.id));
 				}
+			}
+			if (req.to === 'shipped' && order.kind === 'remake') {
+				const [first] = await tx.select({ number: orders.number }).from(orders).where(eq(orders.id, order.remakeOfId ?? order.id));
+				const mail = remakeShippedMail({ number: order.number, remakeOf: first?.number ?? order.number, shopperName: order.shopperName, carrier: req.carrier!.trim(), tracking: req.tracking!.trim(), link: fitLink(order.number, '') });
+				return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...mail })];
 			}
 			if (req.to === 'shipped') {
 				const summary = await orderSummary(tx, order);

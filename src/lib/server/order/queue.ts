@@ -11,6 +11,8 @@ export type QueueRow = {
 	promisedDate: string;
 	daysLeft: number;
 	firstName: string;
+	/** A remake after a fit report: cut again at no charge. */
+	remake: boolean;
 	lines: { style: string; fabricId: number; fabric: string; colour: string; fabricCm: number }[];
 };
 
@@ -24,6 +26,7 @@ export async function workQueue(db: Db, stages: OrderStage[] = ['paid']): Promis
 			promisedDate: orders.promisedDate,
 			daysLeft: sql<number>`DATEDIFF(${orders.promisedDate}, CURRENT_DATE())`,
 			name: orders.shopperName,
+			kind: orders.kind,
 			style: styles.name,
 			fabricId: fabrics.id,
 			fabric: fabrics.name,
@@ -40,7 +43,7 @@ export async function workQueue(db: Db, stages: OrderStage[] = ['paid']): Promis
 	for (const r of rows) {
 		let row = byId.get(r.id);
 		if (!row) {
-			row = { id: r.id, number: r.number, status: r.status, promisedDate: r.promisedDate, daysLeft: Number(r.daysLeft), firstName: firstName(r.name), lines: [] };
+			row = { id: r.id, number: r.number, status: r.status, promisedDate: r.promisedDate, daysLeft: Number(r.daysLeft), firstName: firstName(r.name), remake: r.kind === 'remake', lines: [] };
 			byId.set(r.id, row);
 		}
 		row.lines.push({ style: r.style, fabricId: r.fabricId, fabric: r.fabric, colour: r.colour, fabricCm: r.fabricCm });

@@ -41,6 +41,7 @@ export async function takingsSince(db: Db, days: number) {
 	const [row] = await db
 		.select({ total: sql<number>`COALESCE(SUM(${orders.total} - ${orders.refundedTotal}), 0)` })
 		.from(orders)
-		.where(sql`${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL ${days} DAY)`);
+		// Remakes are never takings: they carry no payment, and are left out by kind as well.
+		.where(sql`${orders.kind} = 'order' AND ${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL ${days} DAY)`);
 	return Number(row?.total ?? 0);
 }

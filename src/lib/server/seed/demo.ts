@@ -3,7 +3,7 @@
 import { eq } from 'drizzle-orm';
 import { hashPassword } from '../auth/password';
 import type { Db } from '../db/client';
-import { fabrics, houseRules, orderEvents, orderLines, orders, payments, shopSettings, styles, users } from '../db/schema';
+import { fabrics, fitReports, houseRules, orderEvents, orderLines, orders, payments, shopSettings, styles, users } from '../db/schema';
 import { DEFAULT_RULES, draftSkirt, estimateFabric, type StyleId } from '../../drafting';
 import { priceLine, shippingCost } from '../../pricing';
 import { STAGE_LABELS } from '../../orders/stages';
@@ -21,7 +21,10 @@ export const DEFAULT_SETTINGS = {
 	ordersPerDay: 4,
 	plotterWidthCm: 91.4,
 	remakePolicy:
-		'If your skirt does not fit as drafted, tell us within 30 days of delivery: we alter it or cut it again from your corrected measurements, free of charge, once per order.'
+		'If your skirt does not fit as drafted, tell us within 30 days of delivery: we alter it or cut it again from your corrected measurements, free of charge, once per order.',
+	remakeWindowDays: 30,
+	photoRetentionDays: 90,
+	freeRemakesPerOrder: 1
 };
 
 export async function seedDemo(db: Db, now = new Date()) {
@@ -134,6 +137,26 @@ export async function seedDemo(db: Db, now = new Date()) {
 			}
 		});
 	}
+	await seedFitReport(db, now);
+}
+
+// A fit report waiting on a delivered order, so the owner finds one on her first sign-in.
+async function seedFitReport(db: Db, now: Date) {
+	const [row] = await db.select({ orderId: orders.id, lineId: orderLines.id }).from(orders).innerJoin(orderLines, eq(orderLines.orderId, orders.id)).where(eq(orders.number, 'QL-1002')).limit(1);
+	if (!row) return;
+	await db
+		.insert(fitReports)
+		.ignore()
+		.values({
+			orderId: row.orderId,
+			orderLineId: row.lineId,
+			answers: { waist: { feel: 0 }, highHip: { feel: 0 }, hipSeat: { feel: -1, amountCm: 2 }, length: { feel: 0 }, hemWidth: { feel: -1 }, dartsBack: { feel: 0 } },
+			marks: ['back-seat', 'front-side-left', 'front-side-right'],
+			note: 'Lovely linen! It pulls across the seat when I sit, and the side seams swing forward a little.',
+			units: 'cm',
+			wish: 'alteration',
+			createdAt: new Date(now.getTime() - 2 * DAY)
+		});
 }
 
 async function userByEmail(db: Db, email: string) {

@@ -5,12 +5,13 @@ import { measurementProfiles, orders } from '$lib/server/db/schema';
 import { deleteMeasurements } from '$lib/server/account/personal-data';
 import { currentRules } from '$lib/server/house/rules';
 import { checkCardFit, readCardFit } from '$lib/forms/card';
+import { cardHistory } from '$lib/server/fit/card';
 import type { Actions, PageServerLoad } from './$types';
 import { requireRole, SIGNED_IN } from '$lib/server/access';
 
 export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
-	const [cards, myOrders] = await Promise.all([
+	const [cards, myOrders, history] = await Promise.all([
 		db
 			.select({ id: measurementProfiles.id, name: measurementProfiles.name, units: measurementProfiles.units, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, waistToKnee: measurementProfiles.waistToKnee, adjustments: measurementProfiles.adjustments })
 			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
@@ -19,9 +20,10 @@ export const load: PageServerLoad = async (event) => {
 			.from(orders)
 			.where(eq(orders.userId, userId))
 			.orderBy(desc(orders.createdAt))
-			.limit(5)
+			.limit(5),
+		cardHistory(db, userId)
 	]);
-	return { cards, orders: myOrders, defaultKnee: (await currentRules(db)).rules.kneeDepth };
+	return { cards, orders: myOrders, defaultKnee: (await currentRules(db)).rules.kneeDepth, history: history.map((h) => ({ ...h, at: h.at.toISOString() })) };
 };
 
 export const actions: Actions = {

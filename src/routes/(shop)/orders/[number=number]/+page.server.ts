@@ -2,7 +2,7 @@ import { error, fail, redirect } from '@sveltejs/kit';
 import { eq } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
 import { db } from '$lib/server/db';
-import { orders } from '$lib/server/db/schema';
+import { fitReports, orders } from '$lib/server/db/schema';
 import { orderForShopper } from '$lib/server/order/view';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { startPayment } from '$lib/server/order/place';
@@ -15,7 +15,11 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const token = url.searchParams.get('t');
 	const order = await orderForShopper(db, params.number, locals.user, token);
 	if (!order) error(404, NOT_FOUND);
-	return { order, drawings: await orderLineDrawings(db, order.number), token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+	// "Tell us how it fits" once the skirt has arrived (the fit page says whether the window is still open).
+	const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, order.number));
+	const [report] = await db.select({ id: fitReports.id }).from(fitReports).where(eq(fitReports.orderId, row.id)).limit(1);
+	const fit = report ? 'sent' : ['delivered', 'awaiting_return', 'altering'].includes(order.status) ? 'open' : null;
+	return { order, drawings: await orderLineDrawings(db, order.number), token, fit, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
 };
 
 export const actions: Actions = {

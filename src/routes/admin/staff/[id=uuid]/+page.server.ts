@@ -2,7 +2,7 @@ import { error, fail as kitFail } from '@sveltejs/kit';
 import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
-import { accountById, setRole, switchOff, switchOn } from '$lib/server/account/staff';
+import { accountById, setFitLeave, setRole, switchOff, switchOn } from '$lib/server/account/staff';
 import { roleSchema, ROLE_CHOICES } from '$lib/forms/staff';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
@@ -22,6 +22,7 @@ export const load: PageServerLoad = async (event) => {
 			name: u.name,
 			email: u.email,
 			role: u.role,
+			fitDecider: u.fitDecider,
 			disabledAt: u.disabledAt,
 			createdAt: u.createdAt,
 			hasPassword: Boolean(u.passwordHash)
@@ -68,5 +69,14 @@ export const actions: Actions = {
 		if (!u.disabledAt) return kitFail(409, { message: 'This account is switched on already.' });
 		await switchOn(db, u.id);
 		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
+	},
+	// Leave to open and decide fit reports (photos of a body, her figures): owners always have it.
+	fitLeave: async (event) => {
+		requireRole(event, OWNER);
+		const u = await accountFor(event.params.id);
+		if (u.role !== 'cutter') return kitFail(409, { message: 'Only a cutter needs leave for fit reports: owners decide them anyway, shoppers never see them.' });
+		const allow = (await event.request.formData()).get('allow') === 'on';
+		await setFitLeave(db, u.id, allow);
+		return { notice: allow ? `${u.name ?? u.email} may now open and decide fit reports.` : `${u.name ?? u.email} no longer sees fit reports.` };
 	}
 };

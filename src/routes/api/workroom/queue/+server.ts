@@ -7,5 +7,5 @@ import type { RequestHandler } from './$types';
 // The queue page polls this so the list stays current without a reload.
 export const GET: RequestHandler = async (event) => {
 	requireRole(event, STAFF);
-	return json({ queue: await workQueue(db), at: new Date().toISOString() });
+	return json({ queue: await workQueue(db, ['paid', 'altering']), at: new Date().toISOString() });
 };

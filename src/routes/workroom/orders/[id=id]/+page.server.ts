@@ -5,6 +5,7 @@ import { moveFromForm } from '$lib/server/order/move-action';
 import { orderForWorkroom } from '$lib/server/order/workroom-view';
 import { paperChoiceOf } from '$lib/server/outputs/preference';
 import { shopSettingsOf } from '$lib/server/house/rules';
+import { remakeChanges } from '$lib/server/fit/workroom';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
@@ -15,7 +16,7 @@ export const load: PageServerLoad = async (event) => {
 	const [choice, settings] = await Promise.all([user ? paperChoiceOf(db, user.id) : null, shopSettingsOf(db)]);
 	// The paper offered first: the one this person chose last, else the shop's paper size.
 	const paper = choice?.paper ?? (settings.paperSize === 'Letter' ? 'letter' : 'a4');
-	return { ...found, output: { paper, rollWidthCm: choice?.rollWidthCm ?? settings.plotterWidthCm } };
+	return { ...found, remake: await remakeChanges(db, found.order.id), output: { paper, rollWidthCm: choice?.rollWidthCm ?? settings.plotterWidthCm } };
 };
 
 export const actions: Actions = {

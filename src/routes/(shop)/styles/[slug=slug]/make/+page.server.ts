@@ -9,22 +9,28 @@ import { listFabrics, styleBySlug } from '$lib/server/catalogue/listing';
 import { MAX_ITEMS, readBag, writeBag } from '$lib/server/quote/bag';
 import { quoteSkirt } from '$lib/server/quote/quote';
 import { currentRules } from '$lib/server/house/rules';
+import { formatCm } from '$lib/drafting/units';
+import { changeWords } from '$lib/fit/report';
+import { cardHistory } from '$lib/server/fit/card';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ params, locals }) => {
 	const style = await styleBySlug(db, params.slug);
 	if (!style || style.retiredAt) error(404, 'We do not make that style.');
-	const [fabrics, cards, { rules }] = await Promise.all([
+	const [fabrics, cards, { rules }, history] = await Promise.all([
 		listFabrics(db),
 		locals.user ? db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, locals.user.id)).orderBy(desc(measurementProfiles.updatedAt)) : [],
-		currentRules(db)
+		currentRules(db),
+		locals.user ? cardHistory(db, locals.user.id) : []
 	]);
+	// The atelier's corrections on each card, in words, newest first ("Waist 70 → 72 cm after order QL-1001").
+	const corrections = (id: number) => history.filter((h) => h.profileId === id).map((h) => `${changeWords(h, formatCm)}${h.order ? ` after order ${h.order}` : ''}`);
 	const form = await superValidate(zod4(makeFormSchema), { errors: false });
 	return {
 		form,
 		style: { slug: style.slug, name: style.name, kind: style.kind, makingPrice: style.makingPrice, optionPrices: style.optionPrices },
 		fabrics: fabrics.map((f) => ({ id: f.id, name: f.name, colour: f.colour, swatchHex: f.swatchHex, imageUrl: f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, fibreContent: f.fibreContent, careText: f.careText, widthCm: f.widthCm, pricePerMetre: f.pricePerMetre, inStock: f.stockCm >= 100, nap: f.nap, stretch: f.stretch })),
-		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, waistToKnee: c.waistToKnee, adjustments: c.adjustments ?? null })),
+		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, waistToKnee: c.waistToKnee, adjustments: c.adjustments ?? null, corrections: corrections(c.id) })),
 		// The house rules the browser drafts her skirt with, so its drawing is the one the workroom cuts.
 		rules,
 		defaultDepth: rules.defaultWaistToHip,
