@@ -36,7 +36,7 @@ export async function placeOrder(db: Db, items: BagItem[], shopper: Shopper) {
 	if (items.length === 0) return { ok: false as const, problem: { status: 400, message: 'Your bag is empty.' } satisfies QuoteProblem };
 	const quoted: Quoted[] = [];
 	for (const item of items) {
-		const q = await quoteSkirt(db, { measurements: item.measurements, style: item.style, options: item.options, fabricId: item.fabricId, units: item.units }, { drawing: false });
+		const q = await quoteSkirt(db, { measurements: item.measurements, style: item.style, options: item.options, fabricId: item.fabricId, units: item.units, figuresSource: item.figuresSource }, { drawing: false });
 		if (!q.ok) return q;
 		quoted.push({ item, ...q });
 	}
@@ -102,6 +102,7 @@ async function insertOrder(db: Db, quoted: Quoted[], shopper: Shopper, money: { 
 				// Stretch comes from the cloth; kept with the order so a reprinted ticket drafts the same vent.
 				options: { style: q.style.kind, ...q.item.options, stretch: q.fabric!.stretch },
 				measurements: { ...q.item.measurements, waistToHip: q.item.measurements.waistToHip ?? null },
+				figuresSource: q.item.figuresSource ?? 'measured',
 				figures: q.draft.figures as unknown as Record<string, unknown>,
 				fabricCm: q.quote.fabric!.lengthCm,
 				pricing: { fabric: p.fabric, making: p.making, options: p.options, total: p.fabric + p.making + p.options },

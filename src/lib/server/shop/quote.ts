@@ -6,8 +6,9 @@ import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
 import { OPEN_WORK_STAGES } from '../../orders/stages';
 import { priceLine, promisedShipDate, shippingCost } from '../../pricing';
 import { currentRules, shopSettingsOf } from './rules';
+import { SOURCE_NOTE_SHOPPER, type FigureSource } from '../../drafting/figures-source';
 
-export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in' };
+export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in'; figuresSource?: FigureSource };
 
 export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: Record<string, string[]> };
 
@@ -53,7 +54,9 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		quote: {
 			style: { slug: style.slug, name: style.name, kind: style.kind },
 			figures: draft.figures,
-			warnings: draft.warnings,
+			// Figures found without a tape are drafted as given, and the quote says where they came from.
+			figuresSource: input.figuresSource ?? 'measured',
+			warnings: input.figuresSource && input.figuresSource !== 'measured' ? [SOURCE_NOTE_SHOPPER[input.figuresSource], ...draft.warnings] : draft.warnings,
 			pieces: draft.pieces.map((p) => ({ name: p.name, cut: p.cut })),
 			drawing: opts.drawing === false ? null : toSvg(draft, { view: 'pieces', units: input.units }),
 			fabric: fabric && estimate ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: estimate.length, inStock: fabric.stockCm >= estimate.length } : null,

@@ -35,6 +35,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					id: orderLines.id,
 					orderId: orderLines.orderId,
 					measurements: orderLines.measurements,
+					figuresSource: orderLines.figuresSource,
 					options: orderLines.options,
 					figures: orderLines.figures,
 					fabricCm: orderLines.fabricCm,
@@ -78,6 +79,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					count: lines.length,
 					styleName: l.styleName,
 					measurements: l.measurements,
+					figuresSource: l.figuresSource,
 					options: l.options,
 					figures: l.figures,
 					fabricCm: l.fabricCm

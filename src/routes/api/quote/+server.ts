@@ -18,7 +18,7 @@ export const POST: RequestHandler = async ({ request }) => {
 	const parsed = quoteSchema.safeParse(body);
 	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
 	const q = parsed.data;
-	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units });
+	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource });
 	if (!result.ok) return json({ message: result.problem.message, fields: result.problem.fields ?? {} }, { status: result.problem.status === 404 ? 400 : result.problem.status });
 	return json(result.quote);
 };
