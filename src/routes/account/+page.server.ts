@@ -10,7 +10,7 @@ export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
 	const [cards, myOrders] = await Promise.all([
 		db
-			.select({ id: measurementProfiles.id, name: measurementProfiles.name, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip })
+			.select({ id: measurementProfiles.id, name: measurementProfiles.name, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, source: measurementProfiles.source })
 			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
 		db
 			.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })
