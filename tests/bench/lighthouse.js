@@ -78,8 +78,9 @@ export async function measureTyping(/** @type {{ appUrl: string, cpuSlowdown?: n
 				}
 			}).observe(/** @type {any} */ ({ type: 'event', durationThreshold: 16, buffered: true }));
 		});
-		// Each measurement typed, a little wrong and corrected, then Next: about 60 keys in all.
-		for (const [label, value] of [['Waist', '71.5'], ['Hip', '97'], ['Waist to hip', '21.5'], ['Skirt length', '62']]) {
+		// Each measurement typed, a little wrong and corrected, then Next: a click, the keys, a click.
+		const VALUES = [['Waist', '71.5'], ['Hip', '97'], ['Waist to hip', '21.5'], ['Skirt length', '62']];
+		for (const [label, value] of VALUES) {
 			const field = page.getByLabel(label, { exact: true });
 			await field.click();
 			await field.pressSequentially(`${value}9`, { delay: 120 });
@@ -93,10 +94,11 @@ export async function measureTyping(/** @type {{ appUrl: string, cpuSlowdown?: n
 		/** @type {number[]} */
 		const latencies = await page.evaluate(() => [.../** @type {any} */ (window).__latencies.values()]);
 		// Keys that took under the 16 ms threshold report no entry: they count as fast interactions.
-		const keys = 4 * 4 + ['71.5', '97', '21.5', '62'].join('').length + 4;
+		const keys = VALUES.reduce((n, [, v]) => n + v.length + 4, 0);
+		const interactions = keys + 2 * VALUES.length;
 		const sorted = [...latencies].sort((a, b) => b - a);
-		const inp = sorted[Math.min(sorted.length - 1, Math.floor(keys / 50))] ?? 0;
-		return { interactions: keys, slowOnes: latencies.length, inpMs: inp, worstMs: sorted[0] ?? 0, medianSlowMs: sorted.length ? sorted[Math.floor(sorted.length / 2)] : 0, cpuSlowdown };
+		const inp = sorted[Math.min(sorted.length - 1, Math.floor(interactions / 50))] ?? 0;
+		return { interactions, keys, slowOnes: latencies.length, inpMs: inp, worstMs: sorted[0] ?? 0, medianSlowMs: sorted.length ? sorted[Math.floor(sorted.length / 2)] : 0, cpuSlowdown };
 	} finally {
 		await browser.close();
 	}
@@ -120,7 +122,7 @@ export function lighthouseRows(/** @type {any} */ lh, /** @type {any} */ typing)
 		}
 	if (isErr(typing)) rows.push({ ...base, id: 'inp.typing', measure: 'typing a measurement: INP', unit: 'ms', median: `not measured: ${typing?.error ?? 'failed'}`, target: 'INP ≤ 200 ms (good)', met: null, notes: '' });
 	else
-		rows.push({ ...base, id: 'inp.typing', measure: 'typing a measurement: INP (Event Timing)', unit: 'ms', median: Math.round(typing.inpMs), target: 'INP ≤ 200 ms (good)', met: typing.inpMs <= 200, notes: `${typing.interactions} key presses at 390 × 844, CPU ${typing.cpuSlowdown}× slower; ${typing.slowOnes} over 16 ms, worst ${Math.round(typing.worstMs)} ms` });
+		rows.push({ ...base, id: 'inp.typing', measure: 'typing a measurement: INP (Event Timing)', unit: 'ms', median: Math.round(typing.inpMs), target: 'INP ≤ 200 ms (good)', met: typing.inpMs <= 200, notes: `${typing.interactions} interactions (${typing.keys} key presses, the rest clicks) at 390 × 844, CPU ${typing.cpuSlowdown}× slower; ${typing.slowOnes} over 16 ms, worst ${Math.round(typing.worstMs)} ms, median of those ${Math.round(typing.medianSlowMs)} ms` });
 	return rows;
 }
 

@@ -15,7 +15,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 	return {
 		exportedAt: new Date().toISOString(),
 		account: user,
-		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
+		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, figuresSource: c.source, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
 		orders: myOrders.map((o) => ({
 			number: o.number,
 			stage: o.status,
