@@ -1,4 +1,4 @@
-import { readBag } from '$lib/server/shop/bag';
+import { readBag } from '$lib/server/quote/bag';
 import type { LayoutServerLoad } from './$types';
 
 export const load: LayoutServerLoad = ({ locals, cookies }) => ({

@@ -92,6 +92,7 @@ describe('every route, for every audience', () => {
 		});
 	}
 
+	// Route ids without their (group) folders, which do not appear in URLs.
 	it('lists every route the app has', () => {
 		const root = join(process.cwd(), 'src/routes');
 		const found: string[] = [];
@@ -99,7 +100,7 @@ describe('every route, for every audience', () => {
 			for (const f of readdirSync(dir)) {
 				const p = join(dir, f);
 				if (statSync(p).isDirectory()) walk(p);
-				else if (['+page.svelte', '+server.ts', '+page.server.ts'].includes(f)) found.push(`/${relative(root, dir)}`.replace(/\/$/, '') || '/');
+				else if (['+page.svelte', '+server.ts', '+page.server.ts'].includes(f)) found.push(`/${relative(root, dir)}`.replace(/\/\([^/]+\)/g, '').replace(/\/$/, '') || '/');
 			}
 		};
 		walk(root);

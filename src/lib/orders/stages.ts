@@ -51,8 +51,25 @@ export const ALLOWED_MOVES: Record<OrderStage, readonly OrderStage[]> = {
 	refunded: []
 };
 
-export function canMove(from: OrderStage, to: OrderStage): boolean {
-	return ALLOWED_MOVES[from].includes(to);
+// What the payment provider's events move: a paid checkout, and a refund of everything paid (from any
+// stage an order can have been paid in).
+export const PROVIDER_MOVES: Record<OrderStage, readonly OrderStage[]> = {
+	awaiting_payment: ['paid'],
+	paid: ['refunded'],
+	cutting: ['refunded'],
+	sewn: ['refunded'],
+	finished: ['refunded'],
+	shipped: ['refunded'],
+	delivered: ['refunded'],
+	cancelled: ['refunded'],
+	refunded: []
+};
+
+/** Who moves an order: a person in the workroom or back office, or the payment provider's events. */
+export type Mover = 'person' | 'provider';
+
+export function canMove(from: OrderStage, to: OrderStage, by: Mover = 'person'): boolean {
+	return (by === 'provider' ? PROVIDER_MOVES : ALLOWED_MOVES)[from].includes(to);
 }
 
 /** Stages in which an order still waits for the workroom (used for queue length and ship dates). */

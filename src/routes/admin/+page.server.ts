@@ -1,8 +1,8 @@
 import { count, sql } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { orders, users } from '$lib/server/db/schema';
-import { pipelineBoard, weeklyFigures } from '$lib/server/admin/pipeline';
-import { lowStockFabrics } from '$lib/server/stats';
+import { pipelineBoard, weeklyFigures } from '$lib/server/order/pipeline';
+import { lowStockFabrics } from '$lib/server/order/stats';
 import type { PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

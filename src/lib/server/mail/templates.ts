@@ -1,4 +1,5 @@
 // Every e-mail uses the same words as the shop, a short summary and one link.
+import { firstName } from '$lib/orders/names';
 const esc = (s: string) =>
 	s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
@@ -41,7 +42,6 @@ type OrderSummary = {
 	link: string;
 };
 
-const firstName = (name: string) => name.trim().split(/\s+/)[0] ?? name;
 
 function orderMail(subject: string, o: OrderSummary, lead: string, extra: string[] = []) {
 	const paragraphs = [`Dear ${firstName(o.shopperName)},`, lead, ...o.lines.map((l) => `• ${l}`), `Total ${o.total}. We plan to ship by ${o.promisedDate}.`, ...extra];

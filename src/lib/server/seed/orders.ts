@@ -1,6 +1,6 @@
 // Invented demo orders, at least one in every stage, each drafted by the real engine so the
 // workroom's figures and tickets are the ones the product would have computed.
-import type { OrderStage } from '../../orders/stages';
+import { MAIN_PATH, type OrderStage } from '../../orders/stages';
 
 export type DemoOrder = {
 	number: string;
@@ -38,7 +38,7 @@ export const DEMO_ORDERS: DemoOrder[] = [
 
 /** The stages an order passed through to reach `stage`, in order. */
 export function pathTo(stage: OrderStage): OrderStage[] {
-	const main: OrderStage[] = ['awaiting_payment', 'paid', 'cutting', 'sewn', 'finished', 'shipped', 'delivered'];
+	const main = MAIN_PATH;
 	if (stage === 'cancelled') return ['awaiting_payment', 'paid', 'cancelled'];
 	if (stage === 'refunded') return ['awaiting_payment', 'paid', 'refunded'];
 	return main.slice(0, main.indexOf(stage) + 1);

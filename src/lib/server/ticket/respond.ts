@@ -2,7 +2,7 @@
 // JSON message saying which order is missing or why it cannot be drafted again.
 import { DraftInputError } from '../../drafting';
 import type { Db } from '../db/client';
-import { shopSettingsOf } from '../shop/rules';
+import { shopSettingsOf } from '../house/rules';
 import { siteOrigin } from '../origin';
 import { loadTickets } from './load';
 import { renderTickets } from './pdf';

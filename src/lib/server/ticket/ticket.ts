@@ -3,6 +3,7 @@
 // Body measurements are personal data (GDPR): the ticket carries the shopper's first name only and
 // just the four measurements the workroom drafts from.
 import type { FigureSource } from '../../drafting/figures-source';
+import { firstName } from '$lib/orders/names';
 import {
 	draftSkirt,
 	estimateFabric,
@@ -82,11 +83,6 @@ export interface TicketInput {
 	fabric: TicketFabric;
 }
 
-/** The first word of a name: all of the shopper the workroom needs to see. */
-export function firstNameOf(full: string): string {
-	return full.trim().split(/\s+/)[0] ?? '';
-}
-
 /** Two figure sets agree when every number is within half a millimetre (they are stored rounded to it). */
 export function sameFigures(a: unknown, b: unknown): boolean {
 	if (typeof a === 'number' && typeof b === 'number') return Math.abs(a - b) < 0.05 + 1e-9;
@@ -134,7 +130,7 @@ export function makeTicket(input: TicketInput): Ticket {
 	return {
 		orderId: input.orderId,
 		number: input.number,
-		firstName: firstNameOf(input.shopperName),
+		firstName: firstName(input.shopperName),
 		status: input.status,
 		promisedDate: input.promisedDate,
 		houseRulesId: input.houseRulesId,

@@ -6,7 +6,7 @@ import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { fabrics } from '$lib/server/db/schema';
-import { acceptSwatch, discardUpload, tooLarge } from '$lib/server/uploads';
+import { acceptSwatch, discardUpload, tooLarge } from '$lib/server/catalogue/uploads';
 import { fabricFormData, fabricValues, newFabricSlug } from './catalogue.server';
 import { fabricSchema, MAX_SWATCH_BYTES } from '$lib/forms/catalogue';
 

@@ -1,5 +1,5 @@
 import { db } from '$lib/server/db';
-import { allOrders, readFilter, toCsv } from '$lib/server/admin/orders';
+import { allOrders, readFilter, toCsv } from '$lib/server/order/owner-list';
 import type { RequestHandler } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

@@ -1,5 +1,5 @@
 import { db } from '$lib/server/db';
-import { readFilter, searchOrders } from '$lib/server/admin/orders';
+import { readFilter, searchOrders } from '$lib/server/order/owner-list';
 import type { PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

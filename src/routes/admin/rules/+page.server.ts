@@ -1,11 +1,11 @@
 import { fail } from '@sveltejs/kit';
 import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
-import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/admin/rules-form';
+import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
 import { houseRules, users } from '$lib/server/db/schema';
-import { currentRules } from '$lib/server/shop/rules';
-import { sampleDrawing } from '$lib/server/shop/sample';
+import { currentRules } from '$lib/server/house/rules';
+import { sampleDrawing } from '$lib/server/quote/sample';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

@@ -8,8 +8,8 @@ import { createHash } from 'node:crypto';
 import { db } from '$lib/server/db';
 import { hit } from '$lib/server/limits';
 import { deliverQueued } from '$lib/server/mail';
-import { stripe } from '$lib/server/payments/stripe';
-import { placeOrder, startPayment } from '$lib/server/shop/checkout';
+import { stripe } from '$lib/server/order/payments/stripe';
+import { placeOrder, startPayment } from '$lib/server/order/place';
 import type { RequestHandler } from './$types';
 
 // Each order mails its address and opens a payment page, so orders are counted per client and per

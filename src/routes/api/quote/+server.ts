@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { fieldErrors } from '$lib/forms/errors';
 import { quoteSchema, toCm } from '$lib/forms/quote';
 import { db } from '$lib/server/db';
-import { quoteSkirt } from '$lib/server/shop/quote';
+import { quoteSkirt } from '$lib/server/quote/quote';
 import type { RequestHandler } from './$types';
 
 // Anyone may ask for a quote. Every refusal is a 400 with field errors, never a 500: the body is

@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { uploads } from '$lib/server/db/schema';
-import { readUpload } from '$lib/server/storage';
+import { readUpload } from '$lib/server/catalogue/storage';
 import type { RequestHandler } from './$types';
 
 // Swatches are public: the shop shows them to everyone. Only the swatch purpose is served here,

@@ -1,6 +1,6 @@
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { lays } from '$lib/server/workroom/queue';
+import { lays } from '$lib/server/order/queue';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

@@ -2,10 +2,10 @@ import { error, fail } from '@sveltejs/kit';
 import { z } from 'zod';
 import { db } from '$lib/server/db';
 import { orderEvents } from '$lib/server/db/schema';
-import { requestRefund } from '$lib/server/admin/refund';
-import { stripe } from '$lib/server/payments/stripe';
-import { moveFromForm } from '$lib/server/workroom/move-action';
-import { orderForOwner } from '$lib/server/workroom/order';
+import { requestRefund } from '$lib/server/order/refund';
+import { stripe } from '$lib/server/order/payments/stripe';
+import { moveFromForm } from '$lib/server/order/move-action';
+import { orderForOwner } from '$lib/server/order/workroom-view';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { orderForShopper } from '$lib/server/orders/view';
+import { orderForShopper } from '$lib/server/order/view';
 import type { RequestHandler } from './$types';
 
 // The order page polls this to keep its timeline current without a reload.

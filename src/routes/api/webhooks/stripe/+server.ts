@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { deliverQueued } from '$lib/server/mail';
-import { stripe, webhookSecret } from '$lib/server/payments/stripe';
-import { applyEvent } from '$lib/server/payments/webhook';
+import { stripe, webhookSecret } from '$lib/server/order/payments/stripe';
+import { applyEvent } from '$lib/server/order/payments/webhook';
 import type { RequestHandler } from './$types';
 
 // The provider signs every delivery; an unsigned, tampered or stale one (older than the SDK's

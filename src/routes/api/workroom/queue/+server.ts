@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { workQueue } from '$lib/server/workroom/queue';
+import { workQueue } from '$lib/server/order/queue';
 import type { RequestHandler } from './$types';
 
 // The queue page polls this so the list stays current without a reload.

@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { lowStockFabrics, stageCounts } from '$lib/server/stats';
+import { lowStockFabrics, stageCounts } from '$lib/server/order/stats';
 import type { RequestHandler } from './$types';
 
 // Figures for the workroom's own screens.

@@ -1,8 +1,8 @@
 import { error } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { moveFromForm } from '$lib/server/workroom/move-action';
-import { orderForWorkroom } from '$lib/server/workroom/order';
+import { moveFromForm } from '$lib/server/order/move-action';
+import { orderForWorkroom } from '$lib/server/order/workroom-view';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

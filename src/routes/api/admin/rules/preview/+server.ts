@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { DraftInputError, draftSkirt, resolveRules, toSvg } from '$lib/drafting';
-import { rulesFromForm } from '$lib/server/admin/rules-form';
+import { rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
-import { currentRules } from '$lib/server/shop/rules';
-import { SAMPLE_FIGURE } from '$lib/server/shop/sample';
+import { currentRules } from '$lib/server/house/rules';
+import { SAMPLE_FIGURE } from '$lib/server/quote/sample';
 import type { RequestHandler } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

@@ -4,7 +4,7 @@ import { stageSchema } from '$lib/forms/stage';
 import { requireRole, STAFF } from '$lib/server/access';
 import { db } from '$lib/server/db';
 import { deliverQueued } from '$lib/server/mail';
-import { workroomMove } from '$lib/server/workroom/moves';
+import { workroomMove } from '$lib/server/order/moves';
 import type { RequestHandler } from './$types';
 
 // POST { to, note?, carrier?, tracking?, overrideStock? }: 200 with the new stage, 409 when the

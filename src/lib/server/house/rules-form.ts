@@ -1,0 +1,48 @@
+import { DEFAULT_RULES, type HouseRules } from '$lib/drafting/rules';
+
+/** The house rules the owner edits, by dotted path, with a label and a word of explanation each. */
+export const RULE_FIELDS = [
+	{ path: 'ease.waist.front', label: 'Waist ease, front quarter', help: 'Added to a quarter of the waist so the waistband does not pinch.' },
+	{ path: 'ease.waist.back', label: 'Waist ease, back quarter', help: '' },
+	{ path: 'ease.hip', label: 'Hip ease, each quarter', help: 'Room to sit and walk: 1 cm a quarter is 4 cm round the body.' },
+	{ path: 'balance', label: 'Front–back balance', help: 'Hip width moved from the back to the front, so the side seam hangs straight.' },
+	{ path: 'dartAllowance.back', label: 'Dart allowance at the back waist', help: 'Added to the back waist mark; the centre-back take-in comes out of it.' },
+	{ path: 'dartAllowance.front', label: 'Dart allowance at the front waist', help: '' },
+	{ path: 'centreBackShaping', label: 'Centre back taken in at the waist', help: 'Ruled to nothing at the hip line.' },
+	{ path: 'centreFrontDrop', label: 'Centre front dropped', help: '' },
+	{ path: 'sideRaise', label: 'Side waist raised', help: 'Both side-seam waist points, so the waist curves over the hip.' },
+	{ path: 'darts.fromCentre.back', label: 'Back dart from centre back', help: 'Scaled on very small or large panels.' },
+	{ path: 'darts.fromCentre.front', label: 'Front dart from centre front', help: '' },
+	{ path: 'darts.length.back', label: 'Back dart length', help: 'Never past the hip line.' },
+	{ path: 'darts.length.front', label: 'Front dart length', help: '' },
+	{ path: 'darts.maxIntake', label: 'Largest dart', help: 'Beyond this a second dart shares the intake.' },
+	{ path: 'darts.minIntake', label: 'Smallest dart', help: 'A smaller dart is left out and the side seam takes it.' },
+	{ path: 'defaultWaistToHip', label: 'Waist to hip when unknown', help: 'Used, and said so, when a shopper does not know hers.' },
+	{ path: 'allowances.seam', label: 'Seam allowance', help: 'European patterns 1.5 cm; US ⅝ in.' },
+	{ path: 'allowances.zipSeam', label: 'Zip seam allowance', help: '' },
+	{ path: 'allowances.hem', label: 'Hem allowance', help: 'Circle skirts use their own narrow hem.' },
+	{ path: 'waistband.width', label: 'Waistband width (finished)', help: '' },
+	{ path: 'waistband.underlap', label: 'Waistband underlap', help: '' },
+	{ path: 'fabric.saleStep', label: 'Fabric sold in steps of', help: 'The fabric estimate rounds up to this.' }
+] as const;
+
+export function getPath(obj: unknown, path: string): unknown {
+	return path.split('.').reduce<unknown>((o, k) => (o && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), obj);
+}
+
+/** Rules from a posted form: every listed field as a number, over the given base (unlisted rules kept). */
+export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = DEFAULT_RULES): HouseRules {
+	const out = structuredClone(base) as unknown as Record<string, unknown>;
+	for (const { path } of RULE_FIELDS) {
+		const raw = form[path];
+		// A rule left out keeps its current value; one sent empty or as words is refused.
+		if (raw === undefined) continue;
+		const value = typeof raw === 'number' ? raw : typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
+		const keys = path.split('.');
+		let o = out;
+		for (const k of keys.slice(0, -1)) o = o[k] as Record<string, unknown>;
+		o[keys.at(-1)!] = value;
+	}
+	// Checked by resolveRules before any use: a value out of range is refused there, field by field.
+	return out as unknown as HouseRules;
+}

@@ -1,0 +1,53 @@
+import { eq, inArray, max } from 'drizzle-orm';
+import type { Db } from '../db/client';
+import { houseRules, shopSettings } from '../db/schema';
+import { resolveRules, type HouseRules } from '$lib/drafting/rules';
+import { DEFAULT_SHIPPING, type ShippingRule } from '$lib/pricing';
+
+// Versions never change once written, so each is parsed and checked once per process; only the
+// newest version's id is read on every call, so a saved change counts at once on every app server.
+const parsedVersions = new Map<number, HouseRules>();
+
+/** The newest version of the house drafting rules, merged over the engine's defaults. */
+export async function currentRules(db: Db): Promise<{ id: number; rules: HouseRules }> {
+	const [newest] = await db.select({ id: max(houseRules.id) }).from(houseRules);
+	const id = newest?.id;
+	if (!id) throw new Error('No house rules: run the seed (npm start does).');
+	return { id, rules: await rulesVersion(db, id) };
+}
+
+/** One version of the rules, as an order that was drafted with it needs them. */
+export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
+	let rules = parsedVersions.get(id);
+	if (!rules) {
+		const [row] = await db.select().from(houseRules).where(eq(houseRules.id, id));
+		if (!row) throw new Error(`No house rules version ${id}.`);
+		rules = resolveRules(row.rules as Partial<HouseRules>);
+		parsedVersions.set(id, rules);
+	}
+	return rules;
+}
+
+export type ShopSettings = { currency: string; paperSize: 'A4' | 'Letter'; units: 'cm' | 'in'; shipping: ShippingRule; ordersPerDay: number; remakePolicy: string };
+
+const DEFAULTS: ShopSettings = {
+	currency: 'EUR',
+	paperSize: 'A4',
+	units: 'cm',
+	shipping: DEFAULT_SHIPPING,
+	ordersPerDay: 4,
+	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.'
+};
+
+// Settings change rarely and nothing depends on seeing a change within seconds: each app server
+// keeps them for a few seconds rather than asking on every quote.
+const SETTINGS_TTL_MS = 5_000;
+let cachedSettings: { at: number; value: ShopSettings } | null = null;
+
+export async function shopSettingsOf(db: Db): Promise<ShopSettings> {
+	if (cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
+	const rows = await db.select().from(shopSettings).where(inArray(shopSettings.key, Object.keys(DEFAULTS)));
+	const value = { ...DEFAULTS, ...Object.fromEntries(rows.map((r) => [r.key, r.value])) } as ShopSettings;
+	cachedSettings = { at: Date.now(), value };
+	return value;
+}

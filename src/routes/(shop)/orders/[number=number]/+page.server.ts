@@ -1,0 +1,29 @@
+import { error, fail, redirect } from '@sveltejs/kit';
+import { eq } from 'drizzle-orm';
+import { env } from '$env/dynamic/private';
+import { db } from '$lib/server/db';
+import { orders } from '$lib/server/db/schema';
+import { orderForShopper } from '$lib/server/order/view';
+import { stripe } from '$lib/server/order/payments/stripe';
+import { startPayment } from '$lib/server/order/place';
+import type { Actions, PageServerLoad } from './$types';
+
+const NOT_FOUND = 'We could not find that order. Open it from the link in your e-mail, or sign in to the account you ordered with.';
+
+export const load: PageServerLoad = async ({ params, locals, url }) => {
+	const token = url.searchParams.get('t');
+	const order = await orderForShopper(db, params.number, locals.user, token);
+	if (!order) error(404, NOT_FOUND);
+	return { order, token, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+};
+
+export const actions: Actions = {
+	pay: async ({ params, locals, url }) => {
+		const order = await orderForShopper(db, params.number, locals.user, url.searchParams.get('t'));
+		if (!order) error(404, NOT_FOUND);
+		const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, order.number));
+		const payment = await startPayment(db, stripe(), row.id, env.ORIGIN ?? url.origin);
+		if (!payment.ok) return fail(payment.reason === 'away' ? 503 : 409, { payError: payment.message });
+		redirect(303, payment.url);
+	}
+};
