@@ -70,6 +70,7 @@ for (const r of PAGES) {
 }
 
 test('the measuring steps, the no-tape ways in and the configure page work from the keyboard, and pass axe open', async ({ browser }) => {
+	test.setTimeout(120_000);
 	const page = await (await contextFor(browser, 'guest')).newPage();
 	await page.goto('/styles/rue-straight/make');
 	// The ways in without a tape: a disclosure button, then tabs moved by the arrow keys.
