@@ -37,6 +37,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					measurements: orderLines.measurements,
 					figuresSource: orderLines.figuresSource,
 					options: orderLines.options,
+					adjustments: orderLines.adjustments,
 					figures: orderLines.figures,
 					fabricCm: orderLines.fabricCm,
 					styleName: styles.name,
@@ -81,6 +82,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					measurements: l.measurements,
 					figuresSource: l.figuresSource,
 					options: l.options,
+					adjustments: l.adjustments,
 					figures: l.figures,
 					fabricCm: l.fabricCm
 				},

@@ -1,5 +1,6 @@
 import { json } from '@sveltejs/kit';
-import { fieldErrors } from '$lib/forms/errors';
+import { asBodyFailure, failure } from '$lib/failure';
+import { failureJson, invalidBody } from '$lib/server/answer';
 import { quoteSchema, toCm } from '$lib/forms/quote';
 import { db } from '$lib/server/db';
 import { quoteSkirt } from '$lib/server/quote/quote';
@@ -13,12 +14,12 @@ export const POST: RequestHandler = async ({ request }) => {
 	try {
 		body = JSON.parse(text);
 	} catch {
-		return json({ message: 'Send the quote request as JSON.', fields: { body: ['Malformed JSON.'] } }, { status: 400 });
+		return failureJson(failure(400, 'Send the quote request as JSON.', { fields: { body: ['Malformed JSON.'] } }));
 	}
 	const parsed = quoteSchema.safeParse(body);
-	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
+	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const q = parsed.data;
 	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource });
-	if (!result.ok) return json({ message: result.problem.message, fields: result.problem.fields ?? {} }, { status: result.problem.status === 404 ? 400 : result.problem.status });
+	if (!result.ok) return failureJson(asBodyFailure(result));
 	return json(result.quote);
 };

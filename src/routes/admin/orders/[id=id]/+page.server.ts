@@ -18,7 +18,7 @@ export const load: PageServerLoad = async (event) => {
 };
 
 const refundSchema = z.object({
-	amount: z.coerce.number({ error: 'Enter the amount in euros.' }).positive('Enter the amount in euros.').max(100_000),
+	amount: z.coerce.number({ error: 'Enter the amount to refund as a number, such as 12.50.' }).positive('Enter the amount to refund as a number, such as 12.50.').max(1_000_000),
 	reason: z.string().trim().max(200).default(''),
 	refundKey: z.string({ error: 'This refund form is out of date: reload the page and send it again.' }).regex(/^[A-Za-z0-9-]{16,64}$/, 'This refund form is out of date: reload the page and send it again.')
 });
@@ -38,7 +38,7 @@ export const actions: Actions = {
 		const { params } = event;
 		const parsed = refundSchema.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success) return fail(400, { message: parsed.error.issues[0].message });
-		const r = await requestRefund(db, stripe(), Number(params.id), Math.round(parsed.data.amount * 100), { id: user.id, label: user.name }, parsed.data.reason, parsed.data.refundKey);
+		const r = await requestRefund(db, stripe(), Number(params.id), parsed.data.amount, { id: user.id, label: user.name }, parsed.data.reason, parsed.data.refundKey);
 		if (!r.ok) return fail(400, { message: r.message });
 		return { message: r.message };
 	},
