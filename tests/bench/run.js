@@ -66,7 +66,7 @@ async function main() {
 	const startedAt = new Date();
 	const loadBefore = os.loadavg();
 	ensurePackages();
-	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'] });
+	ensureDebianPackages({ mariadbd: ['mariadb-server'], mariadb: ['mariadb-client'], chromium: ['chromium'] });
 	// npm packages only after ensurePackages has put them in place.
 	const { startStack } = await import('../../fakes/stack/stack.js');
 	const { measureQuote } = await import('./http.js');
@@ -109,6 +109,10 @@ async function main() {
 	const live = await measure('configure page in Chromium: draft + drawing per change (200 changes), first JS, engine chunk', () =>
 		measureLive({ appUrl: env.APP_URL, buildDir: env.QL_BUILD_DIR })
 	);
+	// In the browser while the app is otherwise idle: Lighthouse's mobile profile, then typing delay.
+	const { measureLighthouse, measureTyping, lighthouseRows } = await import('./lighthouse.js');
+	const lighthouse = await measure('Lighthouse (mobile profile, Debian Chromium): home, style and configure pages', () => measureLighthouse({ appUrl: env.APP_URL }));
+	const typing = await measure('typing delay: INP while typing the measurements (Event Timing, CPU 4× slower)', () => measureTyping({ appUrl: env.APP_URL }));
 
 	const quote = await measure('quote API: POST /api/quote vs GET /healthz, 32 connections, 10 s each', () =>
 		measureQuote({ appUrl: env.APP_URL })
@@ -161,8 +165,8 @@ async function main() {
 		}
 	});
 
-	const raw = { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live };
-	const rows = rowsFrom(raw);
+	const raw = { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live, lighthouse, typing };
+	const rows = [...rowsFrom(raw), ...lighthouseRows(lighthouse, typing)];
 	const report = {
 		startedAt: startedAt.toISOString(),
 		finishedAt: new Date().toISOString(),

@@ -1,5 +1,4 @@
 import { expect, test, type Page } from '@playwright/test';
-import AxeBuilder from '@axe-core/playwright';
 
 const MAIL = process.env.MAIL_URL!;
 
@@ -89,11 +88,4 @@ test('the measuring steps work with the keyboard alone', async ({ page }) => {
 	await expect(page.getByLabel('Waist to hip')).toBeVisible();
 });
 
-for (const path of ['/', '/styles/rue-straight', '/styles/carousel-full-circle/make', '/bag', '/signin', '/register']) {
-	test(`no serious accessibility findings on ${path}`, async ({ page }) => {
-		await page.goto(path);
-		const results = await new AxeBuilder({ page }).analyze();
-		const serious = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-		expect(serious.map((v) => `${v.id}: ${v.nodes.map((n) => n.target).join(', ')}`)).toEqual([]);
-	});
-}
+// Accessibility (axe on every page of every audience) lives in a11y.spec.ts.

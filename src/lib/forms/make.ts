@@ -5,6 +5,7 @@ import { toCm, UNITS, type BagItem } from './quote';
 import { inUnits } from './units';
 import { validateMeasurements } from '../drafting/measurements';
 import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing } from './fit';
+import { FIGURE_SOURCES } from '../drafting/figures-source';
 
 // Empty until the shopper types (null), so the form never shows a made-up 0.
 const measure = z.number().nullable().default(null);
@@ -34,7 +35,13 @@ export const makeFormSchema = z
 		fabricId: z.number({ error: 'Choose a fabric.' }).int().positive('Choose a fabric.'),
 		saveCard: z.boolean().default(false),
 		cardName: z.string().trim().max(80).default(''),
-		consent: z.boolean().default(false)
+		consent: z.boolean().default(false),
+		// Where the figures came from (her tape, a size chart, a skirt laid flat): set by the way in she
+		// chose, kept on the order line and the measure card.
+		figuresSource: z.enum(FIGURE_SOURCES).default('measured'),
+		// Save over one of her own cards (0: a new card), so chart or flat-garment figures can be replaced
+		// by measured ones later.
+		replaceCardId: z.number().int().min(0).default(0)
 	})
 	.superRefine((f, ctx) => {
 		const fields: (keyof typeof LABELS)[] = f.unknownDepth ? ['waist', 'hip', 'length'] : ['waist', 'hip', 'length', 'waistToHip'];
@@ -84,6 +91,7 @@ export function bagItemFrom(style: string, f: MakeForm): BagItem {
 		style,
 		fabricId: f.fabricId,
 		units: f.units,
+		figuresSource: f.figuresSource,
 		// Only called on a valid form, where every measurement is a number.
 		measurements: measurementsOf(f),
 		options: {

@@ -11,7 +11,8 @@ export const orderApiSchema = z.object({
 				style: z.string().min(1).max(80),
 				fabricId: z.number().int().positive(),
 				options: optionsSchema.default({ waistband: 'band', closure: { kind: 'zip', position: 'centre-back' }, lining: false, pockets: false, vent: 'auto' }),
-				units: z.enum(['cm', 'in']).default('cm')
+				units: z.enum(['cm', 'in']).default('cm'),
+				figuresSource: quoteSchema.shape.figuresSource
 			})
 		)
 		.min(1, 'Send at least one skirt.')

@@ -5,6 +5,7 @@ import { validateMeasurements } from '../drafting/measurements';
 import type { FitAdjustments } from '../drafting/fit';
 import { inToCm } from '../drafting/units';
 import { inUnits } from './units';
+import { FIGURE_SOURCES } from '../drafting/figures-source';
 
 export const UNITS = ['cm', 'in'] as const;
 
@@ -114,7 +115,8 @@ export const quoteSchema = z
 		style: z.string().min(1).max(80),
 		options: optionsSchema.default({ waistband: 'band', closure: { kind: 'zip', position: 'centre-back' }, lining: false, pockets: false, vent: 'auto' }),
 		fabricId: z.number().int().positive().optional(),
-		units: z.enum(UNITS).default('cm')
+		units: z.enum(UNITS).default('cm'),
+		figuresSource: z.enum(FIGURE_SOURCES).default('measured')
 	})
 	.superRefine((q, ctx) => checkRanges(toCm(q.measurements, q.units), ctx, q.units, ['measurements']));
 
@@ -136,7 +138,9 @@ export const bagItemSchema = z.object({
 		adjustments: z.custom<FitAdjustments>((v) => typeof v === 'object' && v !== null && !Array.isArray(v)).optional()
 	}),
 	options: optionsSchema,
-	units: z.enum(UNITS)
+	units: z.enum(UNITS),
+	// Bags from before the source was kept hold measured figures.
+	figuresSource: z.enum(FIGURE_SOURCES).default('measured')
 });
 
 export type BagItem = z.infer<typeof bagItemSchema>;

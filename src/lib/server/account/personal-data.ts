@@ -21,7 +21,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 		fitReports: reports.map((r) => ({ order: myOrders.find((o) => o.id === r.orderId)?.number, answers: r.answers, marks: r.marks, note: r.note, wish: r.wish, decision: r.decision, reason: r.reason, corrections: r.corrections, sentAt: r.createdAt })),
 		measureCardChanges: changes.map((c) => ({ field: c.field, fromCm: c.fromCm, toCm: c.toCm, reason: c.reason, at: c.createdAt })),
 		account: user,
-		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, waistToKneeCm: c.waistToKnee, fitAdjustmentsCm: c.adjustments, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
+		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, waistToKneeCm: c.waistToKnee, fitAdjustmentsCm: c.adjustments, figuresSource: c.source, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
 		orders: myOrders.map((o) => ({
 			number: o.number,
 			stage: o.status,

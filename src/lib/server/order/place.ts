@@ -103,6 +103,7 @@ async function insertOrder(db: Db, quoted: Placed[], shopper: Shopper, money: { 
 				options: { style: q.draft.choice.style, ...q.item.options, stretch: q.fabric.stretch },
 				measurements: storedMeasurements(q.item.measurements),
 				adjustments: q.item.measurements.adjustments ?? null,
+				figuresSource: q.item.figuresSource ?? 'measured',
 				figures: q.draft.figures,
 				fabricCm: q.fabricCm,
 				pricing: q.pricing,

@@ -29,7 +29,8 @@ export async function orderForShopper(db: Db, number: string, viewer: Viewer, to
 				fabricCm: orderLines.fabricCm,
 				options: orderLines.options,
 				lineTotal: orderLines.lineTotal,
-				pricing: orderLines.pricing
+				pricing: orderLines.pricing,
+				figuresSource: orderLines.figuresSource
 			})
 			.from(orderLines)
 			.innerJoin(styles, eq(styles.id, orderLines.styleId))

@@ -1,3 +1,4 @@
+import { SOURCE_NOTE_SHOPPER } from '$lib/drafting/figures-source';
 import type { Db } from '../db/client';
 import type { BagItem } from '$lib/forms/quote';
 import { clothOf, garmentSvg } from '../outputs/garment';
@@ -16,7 +17,8 @@ export async function viewBag(db: Db, items: BagItem[]) {
 			style: q.style.name,
 			fabric,
 			price: q.pricing,
-			warnings: q.draft.warnings,
+			// Figures found without a tape: the bag says where they came from.
+			warnings: item.figuresSource && item.figuresSource !== 'measured' ? [SOURCE_NOTE_SHOPPER[item.figuresSource], ...q.draft.warnings] : q.draft.warnings,
 			drawing: q.fabric ? garmentSvg(q.draft, clothOf(q.fabric), `bag-${item.id}`, item.units) : null,
 			measurements: item.measurements,
 			units: item.units,

@@ -13,8 +13,9 @@ import { inUnits } from '$lib/forms/units';
 import { OPEN_WORK_STAGES } from '$lib/orders/stages';
 import { priceLine, promisedShipDate, shippingCost, type LinePricing } from '$lib/pricing';
 import { currentRules, shopSettingsOf, type ShopSettings } from '../house/rules';
+import { SOURCE_NOTE_SHOPPER, type FigureSource } from '$lib/drafting/figures-source';
 
-export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in' };
+export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in'; figuresSource?: FigureSource };
 
 type StyleRow = typeof styles.$inferSelect;
 type FabricRow = typeof fabrics.$inferSelect;
@@ -124,7 +125,9 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { now?: Date }
 		quote: {
 			style: { slug: style.slug, name: style.name, kind: style.kind },
 			figures: draft.figures,
-			warnings: draft.warnings,
+			// Figures found without a tape are drafted as given, and the quote says where they came from.
+			figuresSource: input.figuresSource ?? 'measured',
+			warnings: input.figuresSource && input.figuresSource !== 'measured' ? [SOURCE_NOTE_SHOPPER[input.figuresSource], ...draft.warnings] : draft.warnings,
 			pieces: draft.pieces.map((p) => ({ name: p.name, cut: p.cut })),
 			fabric: fabric && fabricCm !== null ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: fabricCm, inStock: fabric.stockCm >= fabricCm } : null,
 			price: pricing ? { ...pricing, shipping: bag.shipping, total: pricing.total + bag.shipping, currency: bag.currency } : null,

@@ -23,6 +23,13 @@ export const num = (cm: number) => formatCm(cm).replace(' cm', '');
 
 const ROW = 11;
 
+const SOURCE_SHORT: Record<Ticket['figuresSource'], string> = { measured: 'her tape', size_chart: 'a size chart', flat_garment: 'a skirt laid flat' };
+const SOURCE_LINES: Record<Ticket['figuresSource'], string[]> = {
+	measured: [],
+	size_chart: ['Her usual size on the ASTM D5585 chart:', 'a chart body, not hers. No tape used.'],
+	flat_garment: ['A skirt that fits her, laid flat: widths', 'doubled, house ease taken off. No tape.']
+};
+
 /** Label on the left, value on the right of a column. */
 const pairs = (doc: Doc, rows: string[][], x: number, w: number, y: number) =>
 	table(doc, x, y, [x + w], rows, { label: w * 0.5, value: w * 0.55, step: ROW });
@@ -94,7 +101,8 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 			g.waistToHip === null ? `not given: ${formatCm(t.draft.measurements.hipDepth)} used` : formatCm(g.waistToHip)
 		],
 		['Waist to knee', g.waistToKnee === null || g.waistToKnee === undefined ? kneeWords(t.draft) : formatCm(g.waistToKnee)],
-		['Skirt length', formatCm(g.length)]
+		['Skirt length', formatCm(g.length)],
+		['Figures from', SOURCE_SHORT[t.figuresSource]]
 	];
 	y = pairs(doc, rows, x, w, y);
 	if (g.confirmed) {
@@ -102,7 +110,10 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 		y += ROW;
 	}
 	line(doc, 'Length at the side, waist to hem.', x, y + 8, { size: 6.5, color: PENCIL, maxWidth: w });
-	return y + ROW;
+	// Figures found without a tape on her body: the cutter is told how, in two short lines.
+	const note = SOURCE_LINES[t.figuresSource];
+	note.forEach((text, i) => line(doc, text, x, y + 8 + (i + 1) * 8, { size: 6.5, color: THREAD, maxWidth: w }));
+	return y + ROW + note.length * 8;
 }
 
 function workingValues(doc: Doc, t: Ticket, x: number, w: number, top: number): number {

@@ -2,6 +2,7 @@
 // and options, drafted with the house rules the order was placed under, so a reprint never changes.
 // Body measurements are personal data (GDPR): the ticket carries the shopper's first name only and
 // just the four measurements the workroom drafts from.
+import type { FigureSource } from '../../drafting/figures-source';
 import { firstName } from '$lib/orders/names';
 import {
 	draftSkirt,
@@ -42,6 +43,8 @@ export interface Ticket {
 	line: { id: number; index: number; count: number };
 	styleName: string;
 	given: GivenMeasurements;
+	/** Where the figures came from: her tape, a size chart, or a skirt that fits her laid flat. */
+	figuresSource: FigureSource;
 	draft: Draft;
 	fabric: TicketFabric;
 	/** The shell fabric to cut, or why it could not be laid (a fabric narrower than a piece). */
@@ -68,6 +71,7 @@ export interface TicketInput {
 		count: number;
 		styleName: string;
 		measurements: StoredLine['measurements'];
+		figuresSource?: FigureSource;
 		options: StoredChoice;
 		adjustments?: FitAdjustments | null;
 		figures?: StoredLine['figures'] | null;
@@ -134,6 +138,7 @@ export function makeTicket(input: TicketInput): Ticket {
 		line: { id: input.line.id, index: input.line.index, count: input.line.count },
 		styleName: input.line.styleName,
 		given,
+		figuresSource: input.line.figuresSource ?? 'measured',
 		draft,
 		fabric: input.fabric,
 		estimate,

@@ -13,7 +13,7 @@ export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
 	const [cards, myOrders, history] = await Promise.all([
 		db
-			.select({ id: measurementProfiles.id, name: measurementProfiles.name, units: measurementProfiles.units, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, waistToKnee: measurementProfiles.waistToKnee, adjustments: measurementProfiles.adjustments })
+			.select({ id: measurementProfiles.id, name: measurementProfiles.name, units: measurementProfiles.units, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, source: measurementProfiles.source, waistToKnee: measurementProfiles.waistToKnee, adjustments: measurementProfiles.adjustments })
 			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
 		db
 			.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })

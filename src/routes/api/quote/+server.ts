@@ -19,7 +19,7 @@ export const POST: RequestHandler = async ({ request }) => {
 	const parsed = quoteSchema.safeParse(body);
 	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const q = parsed.data;
-	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units });
+	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource });
 	if (!result.ok) return failureJson(asBodyFailure(result));
 	return json(result.quote);
 };

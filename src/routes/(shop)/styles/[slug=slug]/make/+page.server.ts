@@ -1,5 +1,5 @@
 import { error, fail, redirect } from '@sveltejs/kit';
-import { desc, eq } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { bagItemFrom, makeFormSchema } from '$lib/forms/make';
@@ -30,11 +30,13 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 		form,
 		style: { slug: style.slug, name: style.name, kind: style.kind, makingPrice: style.makingPrice, optionPrices: style.optionPrices },
 		fabrics: fabrics.map((f) => ({ id: f.id, name: f.name, colour: f.colour, swatchHex: f.swatchHex, imageUrl: f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, fibreContent: f.fibreContent, careText: f.careText, widthCm: f.widthCm, pricePerMetre: f.pricePerMetre, inStock: f.stockCm >= 100, nap: f.nap, stretch: f.stretch })),
-		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, waistToKnee: c.waistToKnee, adjustments: c.adjustments ?? null, corrections: corrections(c.id) })),
+		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, waistToKnee: c.waistToKnee, adjustments: c.adjustments ?? null, corrections: corrections(c.id), source: c.source })),
 		// The house rules the browser drafts her skirt with, so its drawing is the one the workroom cuts.
 		rules,
 		defaultDepth: rules.defaultWaistToHip,
 		defaultKnee: rules.kneeDepth,
+		// The ease the draft adds, taken off the widths of a skirt laid flat (the no-tape way in).
+		ease: rules.ease,
 		signedIn: Boolean(locals.user)
 	};
 };
@@ -57,7 +59,15 @@ export const actions: Actions = {
 		if (bag.length >= MAX_ITEMS) return setError(form, '', `Your bag holds ${MAX_ITEMS} skirts at most: check out first, then start another order.`);
 		if (form.data.saveCard && locals.user) {
 			const m = item.measurements;
-			await db.insert(measurementProfiles).values({ userId: locals.user.id, name: form.data.cardName, waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip ?? null, waistToKnee: m.waistToKnee ?? null, adjustments: m.adjustments ?? null, units: item.units, consentAt: new Date() });
+			const card = { name: form.data.cardName, waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip ?? null, waistToKnee: m.waistToKnee ?? null, adjustments: m.adjustments ?? null, units: item.units, source: item.figuresSource, consentAt: new Date() };
+			if (form.data.replaceCardId) {
+				// Save over one of her own cards only (the user id is part of the condition): chart or
+				// flat-garment figures replaced by measured ones, or the other way round.
+				const [{ affectedRows }] = await db.update(measurementProfiles).set(card).where(and(eq(measurementProfiles.id, form.data.replaceCardId), eq(measurementProfiles.userId, locals.user.id)));
+				if (affectedRows === 0) return setError(form, 'replaceCardId', 'We found no measure card of yours with that number: choose one of yours, or save a new card.');
+			} else {
+				await db.insert(measurementProfiles).values({ userId: locals.user.id, ...card });
+			}
 		}
 		writeBag(cookies, [...bag, item]);
 		redirect(303, '/bag');
