@@ -11,6 +11,9 @@ export type QuoteInput = { measurements: MeasurementsCm; style: string; options:
 
 export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: Record<string, string[]> };
 
+// Typed once, so the refusals below share one type instead of a union of their literal shapes.
+const refuse = (problem: QuoteProblem) => ({ ok: false as const, problem });
+
 /**
  * Drafts, estimates and prices one skirt from the database's current styles, fabrics and house
  * rules. The quote API, the bag and the checkout all call this, so the shopper sees the price she pays.
@@ -24,9 +27,9 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		shopSettingsOf(db),
 		db.select({ waiting: count() }).from(orders).where(inArray(orders.status, [...OPEN_WORK_STAGES]))
 	]);
-	if (!style) return { ok: false as const, problem: { status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } } satisfies QuoteProblem };
+	if (!style) return refuse({ status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } });
 	if (input.fabricId !== undefined && !fabric) {
-		return { ok: false as const, problem: { status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } } satisfies QuoteProblem };
+		return refuse({ status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } });
 	}
 
 	let draft;
@@ -36,7 +39,7 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		if (err instanceof DraftInputError) {
 			const fields: Record<string, string[]> = {};
 			for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(f.message);
-			return { ok: false as const, problem: { status: 400, message: err.message, fields } satisfies QuoteProblem };
+			return refuse({ status: 400, message: err.message, fields });
 		}
 		throw err;
 	}

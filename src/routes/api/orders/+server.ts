@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { FailureAnswer, PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
 import { env } from '$env/dynamic/private';
 import { fieldErrors } from '$lib/forms/errors';
 import { orderApiSchema } from '$lib/forms/order-api';
@@ -20,7 +21,7 @@ const limitOf = (value: string | undefined, fallback: number) => (value && /^\d+
 function tooMany(what: string, retryAfter: number) {
 	const minutes = Math.ceil(retryAfter / 60);
 	return json(
-		{ message: `Too many orders ${what} in the last hour: try again in ${minutes} minute${minutes === 1 ? '' : 's'}. Nothing was ordered.` },
+		{ message: `Too many orders ${what} in the last hour: try again in ${minutes} minute${minutes === 1 ? '' : 's'}. Nothing was ordered.` } satisfies FailureAnswer,
 		{ status: 429, headers: { 'retry-after': String(retryAfter) } }
 	);
 }
@@ -31,12 +32,12 @@ function tooMany(what: string, retryAfter: number) {
 export const POST: RequestHandler = async ({ request, locals, url, getClientAddress }) => {
 	const body = await request.json().catch(() => undefined);
 	const parsed = orderApiSchema.safeParse(body);
-	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
+	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) } satisfies FailureAnswer, { status: 400 });
 	const { items, shopper } = parsed.data;
 	const bag = items.map((item, i) => ({ id: `api-${i}-${crypto.randomUUID().slice(0, 8)}`, style: item.style, fabricId: item.fabricId, options: item.options, units: item.units, measurements: toCm(item.measurements, item.units) }));
 	for (const [i, item] of bag.entries()) {
 		const problems = validateMeasurements(item.measurements);
-		if (problems.length) return json({ message: 'Some values need a second look.', fields: Object.fromEntries(problems.map((p) => [`items.${i}.measurements.${p.field}`, [p.message]])) }, { status: 400 });
+		if (problems.length) return json({ message: 'Some values need a second look.', fields: Object.fromEntries(problems.map((p) => [`items.${i}.measurements.${p.field}`, [p.message]])) } satisfies FailureAnswer, { status: 400 });
 	}
 	const perClient = await hit(db, `orders:client:${getClientAddress()}`, { limit: limitOf(env.ORDER_LIMIT_PER_CLIENT, 20), windowSeconds: WINDOW_SECONDS });
 	if (!perClient.allowed) return tooMany('from your address', perClient.retryAfter);
@@ -50,9 +51,9 @@ export const POST: RequestHandler = async ({ request, locals, url, getClientAddr
 		userId: locals.user?.id ?? null,
 		address: { name: shopper.name, line1: shopper.line1, ...(shopper.line2 ? { line2: shopper.line2 } : {}), city: shopper.city, postcode: shopper.postcode, country: shopper.country }
 	});
-	if (!placed.ok) return json({ message: placed.problem.message }, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
+	if (!placed.ok) return json({ message: placed.problem.message } satisfies FailureAnswer, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
 	void deliverQueued(placed.mailIds);
 	const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
-	if (!payment.ok) return json({ number: placed.order.number, message: payment.message }, { status: 503 });
-	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url }, { status: 201 });
+	if (!payment.ok) return json({ number: placed.order.number, message: payment.message } satisfies PaymentAwayAnswer, { status: 503 });
+	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url } satisfies PlacedOrderAnswer, { status: 201 });
 };
