@@ -66,7 +66,7 @@ export const QUOTE_EXAMPLES: Record<string, Example> = {
 		summary: 'A waist outside what the engine drafts',
 		body: { measurements: { waist: 30, hip: 98, length: 60 }, style: 'rue-straight' },
 		status: 400,
-		answer: fieldsOf({ 'measurements.waist': ['Your waist should be from 50 to 200 cm.'] })
+		answer: fieldsOf({ 'measurements.waist': ['Your waist must be from 50 to 200 cm: please measure again.'] })
 	}
 };
 
@@ -165,7 +165,7 @@ export const PREVIEW_EXAMPLES: Record<string, Example> = {
 		status: 200,
 		answer: { svg: drawing, figures: sample.figures, warnings: sample.warnings } satisfies RulesPreviewAnswer
 	},
-	words: { summary: 'A rule sent as words', body: { 'ease.hip': 'a little' }, status: 400, answer: { message: 'Some rules are out of range.', fields: { 'ease.hip': ['Hip ease must be a number.'] } } satisfies FailureAnswer }
+	words: { summary: 'A rule sent as words', body: { 'ease.hip': 'a little' }, status: 400, answer: { message: 'The house rule ease.hip must be a number from 0 to 10.', fields: { 'ease.hip': ['The house rule ease.hip must be a number from 0 to 10.'] } } satisfies FailureAnswer }
 };
 
 export const WEBHOOK_EXAMPLES: Record<string, Example> = {
