@@ -12,7 +12,10 @@ export default defineConfig({
 				test: {
 					name: 'unit',
 					environment: 'node',
-					include: ['src/**/*.spec.ts']
+					include: ['src/**/*.spec.ts'],
+					// Drafting a style set or laying a ticket takes a second or two alone, far more on a shared
+					// machine: a stop for a hung test, not a speed target (those live in the bench).
+					testTimeout: 30_000
 				}
 			},
 			{

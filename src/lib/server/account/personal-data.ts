@@ -1,6 +1,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { measurementProfiles, orderLines, orders, users } from '../db/schema';
+import { ERASED } from '../order/lines';
 
 // Orders still in the workroom need the measurements to be cut and sewn; once an order is
 // finished with (shipped, delivered, cancelled, refunded) its copy can go.
@@ -34,7 +35,7 @@ export async function deleteMeasurements(db: Db, userId: string) {
 		const [{ affectedRows: cards }] = await tx.delete(measurementProfiles).where(eq(measurementProfiles.userId, userId));
 		const mine = await tx.select({ id: orders.id, status: orders.status }).from(orders).where(eq(orders.userId, userId));
 		const done = mine.filter((o) => (DONE as readonly string[]).includes(o.status)).map((o) => o.id);
-		if (done.length) await tx.update(orderLines).set({ measurements: {}, figures: {} }).where(and(inArray(orderLines.orderId, done)));
+		if (done.length) await tx.update(orderLines).set({ measurements: ERASED, figures: ERASED, adjustments: null }).where(and(inArray(orderLines.orderId, done)));
 		return { cards, cleared: done.length, kept: mine.length - done.length };
 	});
 }

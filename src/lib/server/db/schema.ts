@@ -16,6 +16,10 @@ import {
 import { sql } from 'drizzle-orm';
 import { ORDER_STAGES } from '../../orders/stages';
 import type { FitAdjustments } from '../../drafting/fit';
+import type { Figures } from '../../drafting/block';
+import type { HouseRulesInput } from '../../drafting/rules';
+import type { StyleId } from '../../drafting/options';
+import type { Erased, LinePricing, StoredChoice, StoredMeasurements } from '../order/lines';
 
 /** Where a set of figures came from (issue: a way in without a tape measure). */
 export const FIGURE_SOURCES = ['measured', 'size_chart', 'flat_garment'] as const;
@@ -175,7 +179,7 @@ export const styles = mysqlTable('style', {
 	id: int('id').autoincrement().primaryKey(),
 	slug: varchar('slug', { length: 80 }).notNull().unique(),
 	name: varchar('name', { length: 120 }).notNull(),
-	kind: varchar('kind', { length: 40 }).notNull(),
+	kind: varchar('kind', { length: 40 }).$type<StyleId>().notNull(),
 	description: text('description').notNull(),
 	makingPrice: int('making_price').notNull(),
 	optionPrices: json('option_prices').$type<StyleOptionPrices>().notNull(),
@@ -214,7 +218,7 @@ export const fabrics = mysqlTable(
 // Every change of the drafting defaults is a new version; orders point at the version they were drafted with.
 export const houseRules = mysqlTable('house_rules', {
 	id: int('id').autoincrement().primaryKey(),
-	rules: json('rules').$type<Record<string, unknown>>().notNull(),
+	rules: json('rules').$type<HouseRulesInput>().notNull(),
 	note: varchar('note', { length: 255 }).notNull().default(''),
 	createdBy: varchar('created_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
 	createdAt: created()
@@ -284,15 +288,15 @@ export const orderLines = mysqlTable(
 		fabricId: int('fabric_id')
 			.notNull()
 			.references(() => fabrics.id),
-		options: json('options').$type<Record<string, unknown>>().notNull(),
+		options: json('options').$type<StoredChoice>().notNull(),
 		// What the shopper gave, in cm, exactly as drafted; the figures are the engine's output for them.
-		measurements: json('measurements').$type<Record<string, number | null>>().notNull(),
+		measurements: json('measurements').$type<StoredMeasurements | Erased>().notNull(),
 		// The fit adjustments drafted into this line, snapshotted like the measurements.
 		adjustments: json('adjustments').$type<FitAdjustments>(),
 		figuresSource: mysqlEnum('figures_source', FIGURE_SOURCES).notNull().default('measured'),
-		figures: json('figures').$type<Record<string, unknown>>().notNull(),
+		figures: json('figures').$type<Figures | Erased>().notNull(),
 		fabricCm: cm('fabric_cm', 6).notNull(),
-		pricing: json('pricing').$type<Record<string, number>>().notNull(),
+		pricing: json('pricing').$type<LinePricing>().notNull(),
 		lineTotal: int('line_total').notNull(),
 		createdAt: created()
 	},

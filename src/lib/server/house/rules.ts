@@ -22,7 +22,7 @@ export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
 	if (!rules) {
 		const [row] = await db.select().from(houseRules).where(eq(houseRules.id, id));
 		if (!row) throw new Error(`No house rules version ${id}.`);
-		rules = resolveRules(row.rules as Partial<HouseRules>);
+		rules = resolveRules(row.rules);
 		parsedVersions.set(id, rules);
 	}
 	return rules;

@@ -9,6 +9,7 @@ import { orderSummary } from './summary';
 import { closeOpenSessions } from './payments/sessions';
 import { stripe } from './payments/stripe';
 import type { OrderStage } from '$lib/orders/stages';
+import { failure } from '$lib/failure';
 import { formatMetres } from '$lib/format';
 
 export type StageRequest = {
@@ -29,9 +30,9 @@ export type StageRequest = {
  * order's open payment page at the provider (under the order's lock, so none opens meanwhile).
  */
 export async function workroomMove(db: Db, req: StageRequest) {
-	if (req.to === 'cancelled' && req.actor.role !== 'owner') return { ok: false as const, status: 403 as const, message: 'Only the owner can cancel an order.' };
+	if (req.to === 'cancelled' && req.actor.role !== 'owner') return failure(403, 'Only the owner can cancel an order.');
 	if (req.to === 'shipped' && (!req.carrier?.trim() || !req.tracking?.trim())) {
-		return { ok: false as const, status: 400 as const, message: 'Enter the carrier and the tracking number to mark an order shipped.' };
+		return failure(400, 'Enter the carrier and the tracking number to mark an order shipped.', { fields: { carrier: ['Enter the carrier.'], tracking: ['Enter the tracking number.'] } });
 	}
 	return moveOrder(db, {
 		orderId: req.orderId,

@@ -3,9 +3,10 @@ import Stripe from 'stripe';
 import type { Db } from '../db/client';
 import { orderEvents, orders, payments } from '../db/schema';
 import { formatMoney } from '$lib/format';
+import { failure, type Failure } from '$lib/failure';
 import type { Actor } from './stage';
 
-export type RefundResult = { ok: true; repeated: boolean; message: string } | { ok: false; message: string };
+export type RefundResult = { ok: true; repeated: boolean; message: string } | Failure;
 
 /**
  * Asks the payment provider for a refund. The order changes when the provider's charge.refunded
@@ -22,11 +23,11 @@ export async function requestRefund(db: Db, stripe: Stripe, orderId: number, amo
 		return await db.transaction(async (tx) => {
 			// The order's row lock covers its payments too: every path that writes them takes it first.
 			const [order] = await tx.select({ id: orders.id }).from(orders).where(eq(orders.id, orderId)).for('update');
-			if (!order) return { ok: false as const, message: 'No such order.' };
+			if (!order) return failure(404, 'No such order.');
 			const [payment] = await tx.select().from(payments).where(and(eq(payments.orderId, orderId), inArray(payments.state, ['paid', 'partially_refunded']))).orderBy(desc(payments.id)).limit(1);
-			if (!payment?.paymentIntentId) return { ok: false as const, message: 'This order has no payment to refund.' };
+			if (!payment?.paymentIntentId) return failure(409, 'This order has no payment to refund.');
 			const left = payment.amount - payment.refundedAmount;
-			if (!Number.isInteger(amount) || amount <= 0 || amount > left) return { ok: false as const, message: `Enter an amount from ${formatMoney(1, payment.currency)} to ${formatMoney(left, payment.currency)}.` };
+			if (!Number.isInteger(amount) || amount <= 0 || amount > left) return failure(400, `Enter an amount from ${formatMoney(1, payment.currency)} to ${formatMoney(left, payment.currency)}.`, { fields: { amount: ['Enter an amount within what was paid.'] } });
 			const money = formatMoney(amount, payment.currency);
 			const refund = await stripe.refunds.create(
 				{ payment_intent: payment.paymentIntentId, amount, reason: 'requested_by_customer', metadata: { order_id: String(orderId) } },
@@ -40,6 +41,6 @@ export async function requestRefund(db: Db, stripe: Stripe, orderId: number, amo
 		});
 	} catch (err) {
 		if (!(err instanceof Stripe.errors.StripeError)) throw err;
-		return { ok: false as const, message: `The payment service refused the refund: ${err.message}` };
+		return failure(502, `The payment service refused the refund: ${err.message}`);
 	}
 }

@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import { failure, type Failure } from '$lib/failure';
 import type { Db } from '../db/client';
 import { orderEvents, orders } from '../db/schema';
 import { canMove, STAGE_LABELS, type Mover, type OrderStage } from '$lib/orders/stages';
@@ -9,7 +10,7 @@ type OrderRow = typeof orders.$inferSelect;
 
 export type MoveResult =
 	| { ok: true; order: OrderRow; mailIds: number[] }
-	| { ok: false; status: 404 | 409; message: string };
+	| Failure;
 
 export class MoveRefused extends Error {
 	constructor(
@@ -44,7 +45,7 @@ export async function moveOrder(db: Db, input: MoveInput & { orderId: number }):
 			return { ok: true as const, ...(await moveLocked(tx, order, input)) };
 		});
 	} catch (err) {
-		if (err instanceof MoveRefused) return { ok: false, status: err.status, message: err.message };
+		if (err instanceof MoveRefused) return failure(err.status, err.message);
 		throw err;
 	}
 }

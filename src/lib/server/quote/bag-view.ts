@@ -1,23 +1,28 @@
 import type { Db } from '../db/client';
 import type { BagItem } from '$lib/forms/quote';
-import { shippingCost } from '$lib/pricing';
-import { quoteSkirt } from './quote';
-import { shopSettingsOf } from '../house/rules';
+import { toSvg } from '$lib/drafting';
+import { quoteBag } from './quote';
 
-/** The bag as the shopper sees it, every line priced again from the database. */
+/** The bag as the shopper sees it, every line priced again from the database in one quote. */
 export async function viewBag(db: Db, items: BagItem[]) {
-	const lines = [];
-	for (const item of items) {
-		const q = await quoteSkirt(db, item, { drawing: true });
-		lines.push(
-			q.ok
-				? { id: item.id, ok: true as const, style: q.quote.style.name, fabric: q.quote.fabric, price: q.quote.price, warnings: q.quote.warnings, drawing: q.quote.drawing, measurements: item.measurements, units: item.units, options: item.options, shipBy: q.quote.shipBy }
-				: { id: item.id, ok: false as const, message: q.problem.message }
-		);
-	}
-	const settings = await shopSettingsOf(db);
-	const subtotal = lines.reduce((s, l) => s + (l.ok && l.price ? l.price.total - l.price.shipping : 0), 0);
-	const shipping = subtotal > 0 ? shippingCost(subtotal, settings.shipping) : 0;
-	const shipBy = lines.map((l) => (l.ok ? l.shipBy : '')).sort().at(-1) ?? null;
-	return { lines, subtotal, shipping, total: subtotal + shipping, currency: settings.currency, shipBy, remakePolicy: settings.remakePolicy };
+	const bag = await quoteBag(db, items);
+	const lines = items.map((item, i) => {
+		const q = bag.lines[i];
+		if (!q.ok) return { id: item.id, ok: false as const, message: q.message };
+		const fabric = q.fabric && q.fabricCm !== null ? { id: q.fabric.id, name: q.fabric.name, widthCm: q.fabric.widthCm, lengthCm: q.fabricCm, inStock: q.fabric.stockCm >= q.fabricCm } : null;
+		return {
+			id: item.id,
+			ok: true as const,
+			style: q.style.name,
+			fabric,
+			price: q.pricing,
+			warnings: q.draft.warnings,
+			drawing: toSvg(q.draft, { view: 'pieces', units: item.units }),
+			measurements: item.measurements,
+			units: item.units,
+			options: item.options,
+			shipBy: q.shipBy
+		};
+	});
+	return { lines, subtotal: bag.subtotal, shipping: bag.shipping, total: bag.total, currency: bag.currency, shipBy: bag.shipBy, remakePolicy: bag.remakePolicy };
 }

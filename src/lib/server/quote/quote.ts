@@ -1,67 +1,128 @@
+// The quote: drafts, lays and prices skirts from the database's current styles, fabrics and house
+// rules. A bag is quoted once: one rules version and one reading of the shop's settings for every line,
+// shipping counted once for the bag. The configure page, the quote API, the bag, the checkout and the
+// order API all come through here, so the shopper pays the price she was shown.
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '$lib/drafting';
+import { DraftInputError, draftSkirt, estimateFabric, toSvg, type Draft, type HouseRules } from '$lib/drafting';
+import { failure, type Failure } from '$lib/failure';
 import type { MeasurementsCm, ShopOptions } from '$lib/forms/quote';
 import { OPEN_WORK_STAGES } from '$lib/orders/stages';
-import { priceLine, promisedShipDate, shippingCost } from '$lib/pricing';
-import { currentRules, shopSettingsOf } from '../house/rules';
+import { priceLine, promisedShipDate, shippingCost, type LinePricing } from '$lib/pricing';
+import { currentRules, shopSettingsOf, type ShopSettings } from '../house/rules';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in' };
 
-export type QuoteProblem = { status: 400 | 404 | 409; message: string; fields?: Record<string, string[]> };
+type StyleRow = typeof styles.$inferSelect;
+type FabricRow = typeof fabrics.$inferSelect;
 
-// Typed once, so the refusals below share one type instead of a union of their literal shapes.
-const refuse = (problem: QuoteProblem) => ({ ok: false as const, problem });
+/** What every line of one quote shares: read once. */
+interface QuoteContext {
+	rulesId: number;
+	rules: HouseRules;
+	settings: ShopSettings;
+	waiting: number;
+	now: Date;
+}
 
-/**
- * Drafts, estimates and prices one skirt from the database's current styles, fabrics and house
- * rules. The quote API, the bag and the checkout all call this, so the shopper sees the price she pays.
- */
-export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: boolean; now?: Date } = {}) {
-	// One round trip: the lookups go out together.
-	const [[style], [fabric], { id: rulesId, rules }, settings, [{ waiting }]] = await Promise.all([
-		db.select().from(styles).where(and(eq(styles.slug, input.style), isNull(styles.retiredAt))).limit(1),
-		input.fabricId === undefined ? Promise.resolve([undefined]) : db.select().from(fabrics).where(and(eq(fabrics.id, input.fabricId), isNull(fabrics.retiredAt))).limit(1),
+/** One quoted line: the draft, the rows it came from, and what the shopper is shown. */
+export interface QuotedLine {
+	ok: true;
+	draft: Draft;
+	style: StyleRow;
+	fabric: FabricRow | null;
+	/** The cloth to buy (cm, rounded up to the sale step), when a fabric was chosen. */
+	fabricCm: number | null;
+	/** The line's price without shipping, when a fabric was chosen. */
+	pricing: LinePricing | null;
+	shipBy: string;
+}
+
+async function quoteContext(db: Db, now: Date): Promise<QuoteContext> {
+	const [{ id: rulesId, rules }, settings, [{ waiting }]] = await Promise.all([
 		currentRules(db),
 		shopSettingsOf(db),
 		db.select({ waiting: count() }).from(orders).where(inArray(orders.status, [...OPEN_WORK_STAGES]))
 	]);
-	if (!style) return refuse({ status: 404, message: 'We do not make that style (any more).', fields: { style: ['Choose one of our styles.'] } });
-	if (input.fabricId !== undefined && !fabric) {
-		return refuse({ status: 404, message: 'That fabric is not in our catalogue.', fields: { fabricId: ['Choose one of our fabrics.'] } });
-	}
+	return { rulesId, rules, settings, waiting, now };
+}
 
+function quoteLine(ctx: QuoteContext, input: QuoteInput, style: StyleRow | undefined, fabric: FabricRow | undefined): QuotedLine | Failure {
+	if (!style) return failure(404, 'We do not make that style (any more).', { fields: { style: ['Choose one of our styles.'] } });
+	if (input.fabricId !== undefined && !fabric) return failure(404, 'That fabric is not in our catalogue.', { fields: { fabricId: ['Choose one of our fabrics.'] } });
 	let draft;
 	try {
-		draft = draftSkirt(input.measurements, { style: style.kind as StyleId, ...input.options, stretch: fabric?.stretch ?? false }, rules);
+		draft = draftSkirt(input.measurements, { style: style.kind, ...input.options, stretch: fabric?.stretch ?? false }, ctx.rules);
 	} catch (err) {
-		if (err instanceof DraftInputError) {
-			const fields: Record<string, string[]> = {};
-			for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(f.message);
-			return refuse({ status: 400, message: err.message, fields });
-		}
-		throw err;
+		if (!(err instanceof DraftInputError)) throw err;
+		const fields: Record<string, string[]> = {};
+		for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(f.message);
+		return failure(400, err.message, { fields });
 	}
-
 	const estimate = fabric ? estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct }) : null;
-	const price = estimate && fabric ? priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: input.options, optionPrices: style.optionPrices }) : null;
-	const shipping = price ? shippingCost(price.total, settings.shipping) : null;
+	const pricing = estimate && fabric ? priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: input.options, optionPrices: style.optionPrices }) : null;
+	const shipBy = promisedShipDate(ctx.now, style.leadDays, ctx.waiting, ctx.settings.ordersPerDay);
+	return { ok: true, draft, style, fabric: fabric ?? null, fabricCm: estimate?.length ?? null, pricing, shipBy };
+}
+
+/** The styles and fabrics the inputs name, each read once. */
+async function rowsFor(db: Db, inputs: QuoteInput[]) {
+	const slugs = [...new Set(inputs.map((i) => i.style))];
+	const fabricIds = [...new Set(inputs.flatMap((i) => (i.fabricId === undefined ? [] : [i.fabricId])))];
+	const [styleRows, fabricRows] = await Promise.all([
+		slugs.length ? db.select().from(styles).where(and(inArray(styles.slug, slugs), isNull(styles.retiredAt))) : Promise.resolve([]),
+		fabricIds.length ? db.select().from(fabrics).where(and(inArray(fabrics.id, fabricIds), isNull(fabrics.retiredAt))) : Promise.resolve([])
+	]);
+	return { style: new Map(styleRows.map((s) => [s.slug, s])), fabric: new Map(fabricRows.map((f) => [f.id, f])) };
+}
+
+/** A quoted bag: every line, the subtotal, shipping once, and the rules version they were all drafted with. */
+export interface QuotedBag {
+	rulesId: number;
+	currency: string;
+	remakePolicy: string;
+	lines: (QuotedLine | Failure)[];
+	/** The lines that quoted, without shipping. */
+	subtotal: number;
+	shipping: number;
+	total: number;
+	/** The latest ship date of the lines: the order ships together. */
+	shipBy: string | null;
+}
+
+/** Quotes every line of a bag with one reading of the rules and settings. */
+export async function quoteBag(db: Db, inputs: QuoteInput[], opts: { now?: Date } = {}): Promise<QuotedBag> {
+	const [ctx, rows] = await Promise.all([quoteContext(db, opts.now ?? new Date()), rowsFor(db, inputs)]);
+	const lines = inputs.map((input) => quoteLine(ctx, input, rows.style.get(input.style), input.fabricId === undefined ? undefined : rows.fabric.get(input.fabricId)));
+	const subtotal = lines.reduce((s, l) => s + (l.ok && l.pricing ? l.pricing.total : 0), 0);
+	const shipping = subtotal > 0 ? shippingCost(subtotal, ctx.settings.shipping) : 0;
+	const shipBy = lines.flatMap((l) => (l.ok ? [l.shipBy] : [])).sort().at(-1) ?? null;
+	return { rulesId: ctx.rulesId, currency: ctx.settings.currency, remakePolicy: ctx.settings.remakePolicy, lines, subtotal, shipping, total: subtotal + shipping, shipBy };
+}
+
+/**
+ * One skirt as the configure page and the quote API show it: the bag of one, with the shipping that
+ * bag would pay. The drawing is optional (the API's headless clients rarely want it).
+ */
+export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: boolean; now?: Date } = {}) {
+	const bag = await quoteBag(db, [input], opts);
+	const line = bag.lines[0];
+	if (!line.ok) return line;
+	const { draft, style, fabric, pricing, fabricCm } = line;
 	return {
 		ok: true as const,
-		draft,
-		rulesId,
-		style,
-		fabric: fabric ?? null,
+		line,
+		rulesId: bag.rulesId,
 		quote: {
 			style: { slug: style.slug, name: style.name, kind: style.kind },
 			figures: draft.figures,
 			warnings: draft.warnings,
 			pieces: draft.pieces.map((p) => ({ name: p.name, cut: p.cut })),
 			drawing: opts.drawing === false ? null : toSvg(draft, { view: 'pieces', units: input.units }),
-			fabric: fabric && estimate ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: estimate.length, inStock: fabric.stockCm >= estimate.length } : null,
-			price: price && shipping !== null ? { ...price, shipping, total: price.total + shipping, currency: settings.currency } : null,
-			shipBy: promisedShipDate(opts.now ?? new Date(), style.leadDays, waiting, settings.ordersPerDay)
+			fabric: fabric && fabricCm !== null ? { id: fabric.id, name: fabric.name, widthCm: fabric.widthCm, lengthCm: fabricCm, inStock: fabric.stockCm >= fabricCm } : null,
+			price: pricing ? { ...pricing, shipping: bag.shipping, total: pricing.total + bag.shipping, currency: bag.currency } : null,
+			shipBy: line.shipBy
 		}
 	};
 }

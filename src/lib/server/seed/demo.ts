@@ -42,7 +42,7 @@ export async function seedDemo(db: Db, now = new Date()) {
 	}
 	let [rules] = await db.select().from(houseRules).orderBy(houseRules.id).limit(1);
 	if (!rules) {
-		await db.insert(houseRules).values({ rules: DEFAULT_RULES as unknown as Record<string, unknown>, note: 'The atelier’s first drafting rules' });
+		await db.insert(houseRules).values({ rules: DEFAULT_RULES, note: 'The atelier’s first drafting rules' });
 		[rules] = await db.select().from(houseRules).orderBy(houseRules.id).limit(1);
 	}
 
@@ -97,7 +97,7 @@ export async function seedDemo(db: Db, now = new Date()) {
 				fabricId: fabric.id,
 				options: choice,
 				measurements: o.measurements,
-				figures: draft.figures as unknown as Record<string, unknown>,
+				figures: draft.figures,
 				fabricCm: estimate.length,
 				pricing,
 				lineTotal: pricing.total,

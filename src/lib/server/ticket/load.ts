@@ -36,6 +36,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					orderId: orderLines.orderId,
 					measurements: orderLines.measurements,
 					options: orderLines.options,
+					adjustments: orderLines.adjustments,
 					figures: orderLines.figures,
 					fabricCm: orderLines.fabricCm,
 					styleName: styles.name,
@@ -79,6 +80,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					styleName: l.styleName,
 					measurements: l.measurements,
 					options: l.options,
+					adjustments: l.adjustments,
 					figures: l.figures,
 					fabricCm: l.fabricCm
 				},

@@ -41,8 +41,8 @@ function input(
 			index: 1,
 			count: 1,
 			styleName: 'Rue straight skirt',
-			measurements: { waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip },
-			options: options as Record<string, unknown>
+			measurements: { waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip ?? null },
+			options: { style: 'straight', stretch: false, ...options }
 		},
 		fabric: FABRIC,
 		...over

@@ -1,6 +1,8 @@
 // The HTTP answers of the ticket routes, shared by the single and the batch route: a PDF inline, or a
 // JSON message saying which order is missing or why it cannot be drafted again.
 import { DraftInputError } from '../../drafting';
+import { failure, type Failure, type FailureStatus } from '$lib/failure';
+import { failureJson } from '../answer';
 import type { Db } from '../db/client';
 import { shopSettingsOf } from '../house/rules';
 import { siteOrigin } from '../origin';
@@ -10,28 +12,25 @@ import { renderTickets } from './pdf';
 /** The most orders one batch may print (a day's cutting, with room to spare). */
 export const MAX_BATCH = 50;
 
-const message = (status: number, text: string) =>
-	new Response(JSON.stringify({ message: text }), {
-		status,
-		headers: { 'content-type': 'application/json; charset=utf-8' }
-	});
+const message = (status: FailureStatus, text: string) => failureJson(failure(status, text));
 
 /** Order ids from a query value like "1,2,3": each a positive whole number, at most MAX_BATCH of them
  * after repeats are dropped; or the reason they are not. */
-export function parseIds(raw: string | null): { ids: number[] } | { problem: string } {
-	if (!raw || !raw.trim()) return { problem: 'Give the orders to print as ?ids=1,2,3.' };
+export function parseIds(raw: string | null): { ok: true; ids: number[] } | Failure {
+	if (!raw || !raw.trim()) return failure(400, 'Give the orders to print as ?ids=1,2,3.');
 	const parts = raw.split(',').map((s) => s.trim());
 	const bad = parts.filter((s) => !/^[1-9]\d{0,8}$/.test(s));
 	if (bad.length)
-		return {
-			problem: `These are not order ids: ${bad
+		return failure(
+			400,
+			`These are not order ids: ${bad
 				.slice(0, 5)
 				.map((b) => JSON.stringify(b))
 				.join(', ')}.`
-		};
+		);
 	const ids = [...new Set(parts.map(Number))];
-	if (ids.length > MAX_BATCH) return { problem: `At most ${MAX_BATCH} orders at once; you asked for ${ids.length}.` };
-	return { ids };
+	if (ids.length > MAX_BATCH) return failure(400, `At most ${MAX_BATCH} orders at once; you asked for ${ids.length}.`);
+	return { ok: true, ids };
 }
 
 /** A file name safe in a header: letters, digits and hyphens only. */
@@ -74,5 +73,3 @@ export async function ticketsResponse(db: Db, ids: number[]): Promise<Response> 
 	});
 }
 
-/** 400 for a batch that cannot be read. */
-export const badBatch = (problem: string) => message(400, problem);

@@ -10,9 +10,10 @@ import {
 	type FabricEstimate,
 	type HouseRules,
 	type HouseRulesInput,
-	type Measurements,
-	type SkirtChoiceInput
+	DraftInputError,
+	type FitAdjustments
 } from '../../drafting';
+import { draftInputOf, isErased, type StoredChoice, type StoredLine, type StoredMeasurements } from '../order/lines';
 import type { OrderStage } from '../../orders/stages';
 
 /** The cloth as the workroom has it on the shelf. */
@@ -26,13 +27,8 @@ export interface TicketFabric {
 	shrinkagePct: number;
 }
 
-/** The measurements as the shopper gave them (cm); a missing waist-to-hip depth stays null. */
-export interface GivenMeasurements {
-	waist: number;
-	hip: number;
-	length: number;
-	waistToHip: number | null;
-}
+/** The measurements as the shopper gave them (cm); a missing depth stays null. */
+export type GivenMeasurements = StoredMeasurements;
 
 /** Everything one ticket (one order line) prints. */
 export interface Ticket {
@@ -71,9 +67,10 @@ export interface TicketInput {
 		index: number;
 		count: number;
 		styleName: string;
-		measurements: Record<string, number | null | undefined>;
-		options: Record<string, unknown>;
-		figures?: unknown;
+		measurements: StoredLine['measurements'];
+		options: StoredChoice;
+		adjustments?: FitAdjustments | null;
+		figures?: StoredLine['figures'] | null;
 		fabricCm?: number | null;
 	};
 	fabric: TicketFabric;
@@ -96,22 +93,13 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 
 /** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
 export function makeTicket(input: TicketInput): Ticket {
-	const m = input.line.measurements;
-	const given: GivenMeasurements = {
-		waist: Number(m.waist),
-		hip: Number(m.hip),
-		length: Number(m.length),
-		waistToHip: typeof m.waistToHip === 'number' ? m.waistToHip : null
-	};
-	const measurements: Measurements = {
-		waist: given.waist,
-		hip: given.hip,
-		length: given.length,
-		...(given.waistToHip === null ? {} : { waistToHip: given.waistToHip })
-	};
+	const stored = draftInputOf({ measurements: input.line.measurements, options: input.line.options, adjustments: input.line.adjustments ?? null });
+	if (!stored || isErased(input.line.measurements)) {
+		throw new DraftInputError([{ field: 'measurements', message: 'Her measurements were erased at her request, so this line can no longer be drafted.' }]);
+	}
+	const given: GivenMeasurements = input.line.measurements;
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
-	const options = { stretch: input.fabric.stretch, ...input.line.options } as SkirtChoiceInput;
-	const draft = draftSkirt(measurements, options, input.rules);
+	const draft = draftSkirt(stored.measurements, { stretch: input.fabric.stretch, ...stored.choice }, input.rules);
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
 	try {

@@ -8,6 +8,7 @@ import { deliverQueued } from '$lib/server/mail';
 import { orderLink } from '$lib/server/order/link';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { clearBag, readBag } from '$lib/server/quote/bag';
+import { asBodyFailure } from '$lib/failure';
 import { viewBag } from '$lib/server/quote/bag-view';
 import { orderByCheckoutKey, placeOrder, startPayment } from '$lib/server/order/place';
 import type { Actions, PageServerLoad } from './$types';
@@ -42,7 +43,7 @@ export const actions: Actions = {
 					checkoutKey: d.checkoutKey ?? null,
 					address: { name: d.name, line1: d.line1, ...(d.line2 ? { line2: d.line2 } : {}), city: d.city, postcode: d.postcode, country: d.country }
 				});
-		if (!placed.ok) return message(form, placed.problem.message, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
+		if (!placed.ok) return message(form, placed.message, { status: asBodyFailure(placed).status });
 		clearBag(cookies);
 		void deliverQueued(placed.mailIds);
 		const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);

@@ -41,7 +41,7 @@ export const actions: Actions = {
 		}
 		if (!note) return fail(400, { message: 'Say in a few words what changed and why: the note stays with every order drafted with these rules.', errors: {} });
 		// A new version: orders already placed keep the rules they were drafted with.
-		const [{ id }] = await db.insert(houseRules).values({ rules: rules as unknown as Record<string, unknown>, note, createdBy: user.id }).$returningId();
+		const [{ id }] = await db.insert(houseRules).values({ rules, note, createdBy: user.id }).$returningId();
 		return { message: `Saved as version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };

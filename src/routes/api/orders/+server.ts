@@ -1,7 +1,8 @@
 import { json } from '@sveltejs/kit';
-import type { FailureAnswer, PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
+import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
 import { env } from '$env/dynamic/private';
-import { fieldErrors } from '$lib/forms/errors';
+import { asBodyFailure, failure } from '$lib/failure';
+import { failureJson, invalidBody } from '$lib/server/answer';
 import { orderApiSchema } from '$lib/forms/order-api';
 import { toCm } from '$lib/forms/quote';
 import { validateMeasurements } from '$lib/drafting';
@@ -20,10 +21,7 @@ const limitOf = (value: string | undefined, fallback: number) => (value && /^\d+
 
 function tooMany(what: string, retryAfter: number) {
 	const minutes = Math.ceil(retryAfter / 60);
-	return json(
-		{ message: `Too many orders ${what} in the last hour: try again in ${minutes} minute${minutes === 1 ? '' : 's'}. Nothing was ordered.` } satisfies FailureAnswer,
-		{ status: 429, headers: { 'retry-after': String(retryAfter) } }
-	);
+	return failureJson(failure(429, `Too many orders ${what} in the last hour: try again in ${minutes} minute${minutes === 1 ? '' : 's'}. Nothing was ordered.`), { 'retry-after': String(retryAfter) });
 }
 
 // Places an order awaiting payment and opens its payment page, priced on the server like the
@@ -32,12 +30,12 @@ function tooMany(what: string, retryAfter: number) {
 export const POST: RequestHandler = async ({ request, locals, url, getClientAddress }) => {
 	const body = await request.json().catch(() => undefined);
 	const parsed = orderApiSchema.safeParse(body);
-	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) } satisfies FailureAnswer, { status: 400 });
+	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const { items, shopper } = parsed.data;
 	const bag = items.map((item, i) => ({ id: `api-${i}-${crypto.randomUUID().slice(0, 8)}`, style: item.style, fabricId: item.fabricId, options: item.options, units: item.units, measurements: toCm(item.measurements, item.units) }));
 	for (const [i, item] of bag.entries()) {
 		const problems = validateMeasurements(item.measurements);
-		if (problems.length) return json({ message: 'Some values need a second look.', fields: Object.fromEntries(problems.map((p) => [`items.${i}.measurements.${p.field}`, [p.message]])) } satisfies FailureAnswer, { status: 400 });
+		if (problems.length) return failureJson(failure(400, 'Some values need a second look.', { fields: Object.fromEntries(problems.map((p) => [`items.${i}.measurements.${p.field}`, [p.message]])) }));
 	}
 	const perClient = await hit(db, `orders:client:${getClientAddress()}`, { limit: limitOf(env.ORDER_LIMIT_PER_CLIENT, 20), windowSeconds: WINDOW_SECONDS });
 	if (!perClient.allowed) return tooMany('from your address', perClient.retryAfter);
@@ -51,9 +49,10 @@ export const POST: RequestHandler = async ({ request, locals, url, getClientAddr
 		userId: locals.user?.id ?? null,
 		address: { name: shopper.name, line1: shopper.line1, ...(shopper.line2 ? { line2: shopper.line2 } : {}), city: shopper.city, postcode: shopper.postcode, country: shopper.country }
 	});
-	if (!placed.ok) return json({ message: placed.problem.message } satisfies FailureAnswer, { status: placed.problem.status === 404 ? 400 : placed.problem.status });
+	if (!placed.ok) return failureJson(asBodyFailure(placed));
 	void deliverQueued(placed.mailIds);
 	const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
+	// The order stands; the client can open its payment page later from the order's own link.
 	if (!payment.ok) return json({ number: placed.order.number, message: payment.message } satisfies PaymentAwayAnswer, { status: 503 });
 	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url } satisfies PlacedOrderAnswer, { status: 201 });
 };

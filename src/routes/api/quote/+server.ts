@@ -1,6 +1,7 @@
 import { json } from '@sveltejs/kit';
-import type { FailureAnswer, QuoteAnswer } from '$lib/server/api/answers';
-import { fieldErrors } from '$lib/forms/errors';
+import type { QuoteAnswer } from '$lib/server/api/answers';
+import { asBodyFailure, failure } from '$lib/failure';
+import { failureJson, invalidBody } from '$lib/server/answer';
 import { quoteSchema, toCm } from '$lib/forms/quote';
 import { db } from '$lib/server/db';
 import { quoteSkirt } from '$lib/server/quote/quote';
@@ -14,12 +15,12 @@ export const POST: RequestHandler = async ({ request }) => {
 	try {
 		body = JSON.parse(text);
 	} catch {
-		return json({ message: 'Send the quote request as JSON.', fields: { body: ['Malformed JSON.'] } } satisfies FailureAnswer, { status: 400 });
+		return failureJson(failure(400, 'Send the quote request as JSON.', { fields: { body: ['Malformed JSON.'] } }));
 	}
 	const parsed = quoteSchema.safeParse(body);
-	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) } satisfies FailureAnswer, { status: 400 });
+	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const q = parsed.data;
 	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units });
-	if (!result.ok) return json({ message: result.problem.message, fields: result.problem.fields ?? {} } satisfies FailureAnswer, { status: result.problem.status === 404 ? 400 : result.problem.status });
+	if (!result.ok) return failureJson(asBodyFailure(result));
 	return json(result.quote satisfies QuoteAnswer);
 };

@@ -1,6 +1,7 @@
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { badBatch, parseIds, ticketsResponse } from '$lib/server/ticket/respond';
+import { failureJson } from '$lib/server/answer';
+import { parseIds, ticketsResponse } from '$lib/server/ticket/respond';
 import type { RequestHandler } from './$types';
 
 // Several orders' cutting tickets in one PDF: /workroom/tickets.pdf?ids=1,2,3, or ?ids=1&ids=2 as the
@@ -8,6 +9,6 @@ import type { RequestHandler } from './$types';
 export const GET: RequestHandler = async (event) => {
 	requireRole(event, STAFF);
 	const parsed = parseIds(event.url.searchParams.getAll('ids').join(','));
-	if ('problem' in parsed) return badBatch(parsed.problem);
+	if (!parsed.ok) return failureJson(parsed);
 	return ticketsResponse(db, parsed.ids);
 };

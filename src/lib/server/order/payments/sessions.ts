@@ -3,10 +3,11 @@ import Stripe from 'stripe';
 import { fabrics, orderLines, orders, payments } from '$lib/server/db/schema';
 import { orderToken } from '../link';
 import type { Tx } from '../stage';
+import { failure, type Failure } from '$lib/failure';
 
 type OrderRow = typeof orders.$inferSelect;
 
-export type Opened = { ok: true; url: string } | { ok: false; reason: 'arrived'; message: string };
+export type Opened = { ok: true; url: string } | Failure;
 
 export const PAYMENT_ARRIVED = 'Your payment has reached the payment service and is being confirmed: this page shows it as paid in a moment. Nothing more is needed.';
 
@@ -42,10 +43,10 @@ export async function openSession(tx: Tx, stripe: Stripe, order: OrderRow, origi
 	const mine = await tx.select().from(payments).where(eq(payments.orderId, order.id));
 	for (const p of mine.filter((row) => row.state === 'open')) {
 		const s = await stripe.checkout.sessions.retrieve(p.checkoutSessionId);
-		if (s.status === 'complete') return { ok: false, reason: 'arrived', message: PAYMENT_ARRIVED };
+		if (s.status === 'complete') return failure(409, PAYMENT_ARRIVED, { reason: 'arrived' });
 		const timeLeft = s.expires_at - Math.floor(Date.now() / 1000);
 		if (s.status === 'open' && s.url && timeLeft > REUSE_MIN_SECONDS && s.amount_total === order.total) return { ok: true, url: s.url };
-		if (s.status === 'open' && (await expireAtProvider(stripe, s.id)) === 'complete') return { ok: false, reason: 'arrived', message: PAYMENT_ARRIVED };
+		if (s.status === 'open' && (await expireAtProvider(stripe, s.id)) === 'complete') return failure(409, PAYMENT_ARRIVED, { reason: 'arrived' });
 		await tx.update(payments).set({ state: 'expired' }).where(eq(payments.id, p.id));
 	}
 	const lines = await tx

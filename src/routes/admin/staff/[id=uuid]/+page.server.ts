@@ -53,11 +53,11 @@ export const actions: Actions = {
 	disable: async (event) => {
 		const me = requireRole(event, OWNER);
 		const u = await accountFor(event.params.id);
-		if (u.id === me.id) return kitFail(403, { problem: SELF });
+		if (u.id === me.id) return kitFail(403, { message: SELF });
 		const confirmed = (await event.request.formData()).get('confirm') === 'on';
 		if (!confirmed)
-			return kitFail(400, { problem: 'Tick the box to confirm: switching an account off signs them out at once.' });
-		if (u.disabledAt) return kitFail(409, { problem: 'This account is switched off already.' });
+			return kitFail(400, { message: 'Tick the box to confirm: switching an account off signs them out at once.' });
+		if (u.disabledAt) return kitFail(409, { message: 'This account is switched off already.' });
 		await db.update(users).set({ disabledAt: new Date() }).where(eq(users.id, u.id));
 		// Their session is checked against the database on every request, so they are out now; raising
 		// the session version keeps their old cookies out even once the account is switched back on.
@@ -72,8 +72,8 @@ export const actions: Actions = {
 	enable: async (event) => {
 		const me = requireRole(event, OWNER);
 		const u = await accountFor(event.params.id);
-		if (u.id === me.id) return kitFail(403, { problem: SELF });
-		if (!u.disabledAt) return kitFail(409, { problem: 'This account is switched on already.' });
+		if (u.id === me.id) return kitFail(403, { message: SELF });
+		if (!u.disabledAt) return kitFail(409, { message: 'This account is switched on already.' });
 		await db.update(users).set({ disabledAt: null }).where(eq(users.id, u.id));
 		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
 	}

@@ -37,7 +37,7 @@ export const actions: Actions = {
 		// Drafted and priced on the server before it goes in the bag: an unknown style, fabric or an
 		// undraftable figure is refused here, beside the form.
 		const q = await quoteSkirt(db, item, { drawing: false });
-		if (!q.ok) return setError(form, q.problem.fields?.fabricId ? 'fabricId' : '', q.problem.message);
+		if (!q.ok) return setError(form, q.fields?.fabricId ? 'fabricId' : '', q.message);
 		if (!q.quote.fabric?.inStock) return setError(form, 'fabricId', 'There is not enough of this fabric left for your skirt: please choose another.');
 		const bag = readBag(cookies);
 		if (bag.length >= MAX_ITEMS) return setError(form, '', `Your bag holds ${MAX_ITEMS} skirts at most: check out first, then start another order.`);

@@ -43,7 +43,7 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		const { params } = event;
 		const fabric = await fabricFor(params.id);
-		if (fabric.retiredAt) return fail(409, { notice: 'This fabric is retired already.' });
+		if (fabric.retiredAt) return fail(409, { message: 'This fabric is retired already.' });
 		await db.update(fabrics).set({ retiredAt: new Date() }).where(eq(fabrics.id, fabric.id));
 		return {
 			notice: `Retired. Shoppers no longer see ${fabric.name}, ${fabric.colour}; orders already placed keep it.`
@@ -53,7 +53,7 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		const { params } = event;
 		const fabric = await fabricFor(params.id);
-		if (!fabric.retiredAt) return fail(409, { notice: 'This fabric is in the shop already.' });
+		if (!fabric.retiredAt) return fail(409, { message: 'This fabric is in the shop already.' });
 		await db.update(fabrics).set({ retiredAt: null }).where(eq(fabrics.id, fabric.id));
 		return { notice: `Back in the shop: ${fabric.name}, ${fabric.colour}.` };
 	}

@@ -37,7 +37,7 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		const { params } = event;
 		const style = await styleFor(params.id);
-		if (style.retiredAt) return fail(409, { notice: 'This style is retired already.' });
+		if (style.retiredAt) return fail(409, { message: 'This style is retired already.' });
 		await db.update(styles).set({ retiredAt: new Date() }).where(eq(styles.id, style.id));
 		return { notice: `Retired. ${style.name} is no longer in the shop; orders already placed keep it.` };
 	},
@@ -45,7 +45,7 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		const { params } = event;
 		const style = await styleFor(params.id);
-		if (!style.retiredAt) return fail(409, { notice: 'This style is in the shop already.' });
+		if (!style.retiredAt) return fail(409, { message: 'This style is in the shop already.' });
 		await db.update(styles).set({ retiredAt: null }).where(eq(styles.id, style.id));
 		return { notice: `Back in the shop: ${style.name}.` };
 	}
