@@ -10,6 +10,8 @@ declare global {
 		}
 		interface PageData {
 			user?: { name: string; role: Role } | null;
+			/** The shop's currency (ISO 4217), from the root layout: every amount is written in it. */
+			currency: string;
 		}
 	}
 }

@@ -1,8 +1,12 @@
+import { db } from '$lib/server/db';
+import { shopSettingsOf } from '$lib/server/house/rules';
 import { readBag } from '$lib/server/quote/bag';
 import type { LayoutServerLoad } from './$types';
 
-export const load: LayoutServerLoad = ({ locals, cookies }) => ({
+export const load: LayoutServerLoad = async ({ locals, cookies }) => ({
 	// Her name and role for the header; nothing else about the person rides along on every page.
 	user: locals.user ? { name: locals.user.name, role: locals.user.role } : null,
-	bagCount: readBag(cookies).length
+	bagCount: readBag(cookies).length,
+	// Every amount on every page is written in the shop's currency (a setting).
+	currency: (await shopSettingsOf(db)).currency
 });

@@ -18,8 +18,10 @@ const amount = (rule: AmountRule) =>
 			if (problem) ctx.addIssue({ code: 'custom', message: problem });
 		});
 
-const euros = (label: string, min: number) =>
-	amount({ label, decimals: 2, min, max: 9999.99, unit: 'euros', example: '24.50' });
+// Prices are typed in the shop's currency (a setting) with two decimals, as the catalogue keeps them in
+// hundredths; the labels show the currency's sign.
+const money = (label: string, min: number) =>
+	amount({ label, decimals: 2, min, max: 9999.99, unit: 'in the shop’s currency', example: '24.50' });
 const text = (min: number, max: number, empty: string, long = `Keep it under ${max} characters.`) =>
 	z.string().trim().min(min, empty).max(max, long);
 
@@ -51,12 +53,12 @@ export const styleSchema = z.object({
 		2000,
 		'Describe the style in a sentence or two (at least 20 characters): shoppers read it first.'
 	),
-	makingPrice: euros('making price', 1),
-	priceLining: euros('price of a lining', 0),
-	pricePockets: euros('price of pockets', 0),
-	priceBand: euros('price of a waistband', 0),
-	priceFacing: euros('price of a facing', 0),
-	priceInvisibleZip: euros('price of an invisible zip', 0),
+	makingPrice: money('making price', 1),
+	priceLining: money('price of a lining', 0),
+	pricePockets: money('price of pockets', 0),
+	priceBand: money('price of a waistband', 0),
+	priceFacing: money('price of a facing', 0),
+	priceInvisibleZip: money('price of an invisible zip', 0),
 	leadDays: amount(RULES.leadDays),
 	sortOrder: amount(RULES.sortOrder)
 });
@@ -81,7 +83,7 @@ export const fabricSchema = z.object({
 		}),
 	careText: text(10, 1000, 'Write the care in words, such as “Machine wash at 30 °C, dry flat, cool iron.”'),
 	widthCm: amount(RULES.width),
-	pricePerMetre: euros('price a metre', 0.01),
+	pricePerMetre: money('price a metre', 0.01),
 	stockMetres: amount(RULES.stock),
 	nap: z.boolean().default(false),
 	stretch: z.boolean().default(false),

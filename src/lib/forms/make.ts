@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { toCm, UNITS, type BagItem } from './quote';
 import { inUnits } from './units';
 import { validateMeasurements } from '../drafting/measurements';
+import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing } from './fit';
 
 // Empty until the shopper types (null), so the form never shows a made-up 0.
 const measure = z.number().nullable().default(null);
@@ -17,6 +18,11 @@ export const makeFormSchema = z
 		unknownDepth: z.boolean().default(false),
 		waistToHip: measure,
 		length: measure,
+		// Optional: empty means the house default, said so on the page and on the pattern.
+		waistToKnee: measure,
+		// She has said a figure outside what a block usually fits is right ("did you mean …?").
+		confirmed: z.boolean().default(false),
+		...fitFields,
 		waistband: z.enum(['band', 'facing']).default('band'),
 		closureKind: z.enum(['zip', 'invisible-zip']).default('zip'),
 		closurePosition: z.enum(['centre-back', 'side']).default('centre-back'),
@@ -37,15 +43,40 @@ export const makeFormSchema = z
 			const message = k === 'waistToHip' ? 'Enter your waist-to-hip depth, or tick "I don’t know it".' : `Enter your ${LABELS[k]}.`;
 			ctx.addIssue({ code: 'custom', path: [k], message });
 		}
-		const cm = toCm({ waist: f.waist ?? NaN, hip: f.hip ?? NaN, length: f.length ?? NaN, waistToHip: f.unknownDepth ? null : (f.waistToHip ?? NaN) }, f.units);
+		const cm = { ...cmOf(f), adjustments: fitFromForm(f, f.units) };
+		// A figure she may confirm is not an error of the form: the engine asks "did you mean …?" for it.
 		for (const p of validateMeasurements(cm)) {
-			if (!(missing as string[]).includes(p.field)) ctx.addIssue({ code: 'custom', path: [p.field], message: inUnits(p.message, f.units) });
+			const field = FIT_FIELD_OF[p.field] ?? p.field;
+			if (!p.confirmable && !(missing as string[]).includes(field)) ctx.addIssue({ code: 'custom', path: [field], message: inUnits(p.message, f.units) });
 		}
+		if (sideMissing(f)) ctx.addIssue({ code: 'custom', path: ['oneHipSide'], message: 'Say which hip is higher or fuller: left or right.' });
 		if (f.saveCard && !f.cardName) ctx.addIssue({ code: 'custom', path: ['cardName'], message: 'Give your measure card a name, such as "Everyday".' });
 		if (f.saveCard && !f.consent) ctx.addIssue({ code: 'custom', path: ['consent'], message: 'We can only keep your measurements with your consent.' });
 	});
 
 export type MakeForm = z.infer<typeof makeFormSchema>;
+
+/** The form's measurements in cm as the engine takes them (an empty girth is NaN, which the checks name). */
+function cmOf(f: MakeForm) {
+	return toCm(
+		{
+			waist: f.waist ?? NaN,
+			hip: f.hip ?? NaN,
+			length: f.length ?? NaN,
+			waistToHip: f.unknownDepth ? null : (f.waistToHip ?? NaN),
+			waistToKnee: f.waistToKnee,
+			confirmed: f.confirmed
+		},
+		f.units
+	);
+}
+
+/** Measurements in cm with the adjustments, as the bag keeps them. */
+export function measurementsOf(f: MakeForm) {
+	const m = cmOf(f);
+	const adjustments = fitFromForm(f, f.units);
+	return adjustments ? { ...m, adjustments } : m;
+}
 
 export function bagItemFrom(style: string, f: MakeForm): BagItem {
 	return {
@@ -54,7 +85,7 @@ export function bagItemFrom(style: string, f: MakeForm): BagItem {
 		fabricId: f.fabricId,
 		units: f.units,
 		// Only called on a valid form, where every measurement is a number.
-		measurements: toCm({ waist: f.waist!, hip: f.hip!, length: f.length!, waistToHip: f.unknownDepth ? null : f.waistToHip }, f.units),
+		measurements: measurementsOf(f),
 		options: {
 			waistband: f.waistband,
 			closure: { kind: f.closureKind, position: f.closurePosition },

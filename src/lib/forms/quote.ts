@@ -1,7 +1,8 @@
 // One schema for the shopper's measurements and choices, used by the measuring form in the browser,
 // the form actions and the /api/quote endpoint, so all three refuse the same things in the same words.
 import { z } from 'zod';
-import { MEASUREMENT_LIMITS, validateMeasurements } from '../drafting/measurements';
+import { validateMeasurements } from '../drafting/measurements';
+import type { FitAdjustments } from '../drafting/fit';
 import { inToCm } from '../drafting/units';
 import { inUnits } from './units';
 
@@ -10,23 +11,76 @@ export const UNITS = ['cm', 'in'] as const;
 const num = (label: string) =>
 	z.number({ error: `Enter your ${label} as a number.` }).refine(Number.isFinite, `Enter your ${label} as a number.`);
 
-/** Measurements as typed, in the shopper's units. */
+const amount = (label: string) => num(label).nullish();
+
+/** Fit adjustments (fit.ts), each amount in the shopper's units; their ranges are the engine's (FIT_LIMITS). */
+export const adjustmentsInput = z
+	.object({
+		hollowBack: amount('hollow back'),
+		roundedAbdomen: amount('rounded abdomen'),
+		prominentSeat: amount('prominent seat'),
+		highHip: amount('high hip'),
+		oneHip: z
+			.object({
+				side: z.enum(['left', 'right'], { error: 'Say which hip is higher or fuller: left or right.' }),
+				higher: amount('higher hip'),
+				fuller: amount('fuller hip')
+			})
+			.strict()
+			.nullish(),
+		ease: z.object({ waist: amount('personal waist ease'), hip: amount('personal hip ease') }).strict().nullish()
+	})
+	.strict();
+
+/** Measurements as typed, in the shopper's units. `confirmed`: she has said a figure outside what a block
+ * usually fits is right (the engine refuses it until then). */
 export const measurementsInput = z.object({
 	waist: num('waist'),
 	hip: num('hip'),
 	length: num('skirt length'),
-	waistToHip: num('waist-to-hip depth').nullish()
+	waistToHip: num('waist-to-hip depth').nullish(),
+	waistToKnee: num('waist-to-knee length').nullish(),
+	confirmed: z.boolean().optional(),
+	adjustments: adjustmentsInput.nullish()
 });
 
-export type MeasurementsCm = { waist: number; hip: number; length: number; waistToHip?: number };
+/** Measurements in cm as the engine takes them (its Measurements), as the bag and the order line keep them. */
+export type MeasurementsCm = { waist: number; hip: number; length: number; waistToHip?: number; waistToKnee?: number; confirmed?: boolean; adjustments?: FitAdjustments };
 
 const round1 = (n: number) => Math.round(n * 10) / 10;
+
+/** Adjustments to centimetres, to the millimetre, leaving out the empty ones (none at all gives undefined). */
+export function adjustmentsToCm(a: z.infer<typeof adjustmentsInput> | null | undefined, units: (typeof UNITS)[number]): FitAdjustments | undefined {
+	if (!a) return undefined;
+	// Amounts are small (a few cm): kept to the millimetre in both units, negative ease included.
+	const f = (v: number | null | undefined) => (v === null || v === undefined ? undefined : units === 'in' ? round1(inToCm(v)) : round1(v));
+	const out: FitAdjustments = {};
+	for (const k of ['hollowBack', 'roundedAbdomen', 'prominentSeat', 'highHip'] as const) {
+		const v = f(a[k]);
+		if (v) out[k] = v;
+	}
+	if (a.oneHip) {
+		const higher = f(a.oneHip.higher);
+		const fuller = f(a.oneHip.fuller);
+		if (higher || fuller) out.oneHip = { side: a.oneHip.side, ...(higher ? { higher } : {}), ...(fuller ? { fuller } : {}) };
+	}
+	if (a.ease) {
+		const waist = f(a.ease.waist);
+		const hip = f(a.ease.hip);
+		if (waist || hip) out.ease = { ...(waist ? { waist } : {}), ...(hip ? { hip } : {}) };
+	}
+	return Object.keys(out).length ? out : undefined;
+}
 
 /** To centimetres, to the millimetre (the precision the database keeps). */
 export function toCm(m: z.infer<typeof measurementsInput>, units: (typeof UNITS)[number]): MeasurementsCm {
 	const f = units === 'in' ? (v: number) => round1(inToCm(v)) : round1;
 	const out: MeasurementsCm = { waist: f(m.waist), hip: f(m.hip), length: f(m.length) };
 	if (m.waistToHip !== null && m.waistToHip !== undefined) out.waistToHip = f(m.waistToHip);
+	if (m.waistToKnee !== null && m.waistToKnee !== undefined) out.waistToKnee = f(m.waistToKnee);
+	if (m.confirmed === true) out.confirmed = true;
+	const adjustments = adjustmentsToCm(m.adjustments, units);
+	if (adjustments) out.adjustments = adjustments;
 	return out;
 }
 
@@ -48,9 +102,10 @@ export const optionsSchema = z
 
 export type ShopOptions = z.infer<typeof optionsSchema>;
 
-/** Checks the measurements against the engine's own ranges, with the messages in the shopper's units. */
+/** Checks the measurements against the engine's own ranges, with the messages in the shopper's units. A
+ * figure she may confirm is left to the engine, which answers with its value and limit ("did you mean …?"). */
 function checkRanges(m: MeasurementsCm, ctx: z.RefinementCtx, units: (typeof UNITS)[number], path: string[]) {
-	for (const p of validateMeasurements(m)) ctx.addIssue({ code: 'custom', message: inUnits(p.message, units), path: [...path, p.field] });
+	for (const p of validateMeasurements(m)) if (!p.confirmable) ctx.addIssue({ code: 'custom', message: inUnits(p.message, units), path: [...path, ...p.field.split('.')] });
 }
 
 export const quoteSchema = z
@@ -70,7 +125,16 @@ export const bagItemSchema = z.object({
 	id: z.string().min(6).max(40),
 	style: z.string().min(1).max(80),
 	fabricId: z.number().int().positive(),
-	measurements: z.object({ waist: z.number(), hip: z.number(), length: z.number(), waistToHip: z.number().optional() }),
+	measurements: z.object({
+		waist: z.number(),
+		hip: z.number(),
+		length: z.number(),
+		waistToHip: z.number().optional(),
+		waistToKnee: z.number().optional(),
+		confirmed: z.boolean().optional(),
+		// In cm; the engine checks the amounts again whenever the item is quoted.
+		adjustments: z.custom<FitAdjustments>((v) => typeof v === 'object' && v !== null && !Array.isArray(v)).optional()
+	}),
 	options: optionsSchema,
 	units: z.enum(UNITS)
 });

@@ -1,11 +1,9 @@
 import { fail, redirect } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { registerSchema } from '$lib/forms/auth';
 import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
-import { hashPassword } from '$lib/server/auth/password';
+import { accountExists, createShopper } from '$lib/server/auth/accounts';
 import { signInWith } from '$lib/server/auth/actions';
 import { hit } from '$lib/server/limits';
 import { sendMail } from '$lib/server/mail';
@@ -23,8 +21,7 @@ export const actions: Actions = {
 		const form = await superValidate(event.request, zod4(registerSchema));
 		if (!form.valid) return fail(400, { form });
 		const { name, email, password } = form.data;
-		const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, email)).limit(1);
-		if (existing) {
+		if (await accountExists(db, email)) {
 			// The screen must not tell a stranger that this address has an account: its owner gets a mail
 			// instead (at most three an hour, so the form cannot be used to flood someone's inbox).
 			form.data.password = '';
@@ -32,8 +29,7 @@ export const actions: Actions = {
 			if (allowed.allowed) await sendMail({ to: email, ...registerAttemptMail(siteUrl('/signin')) });
 			return message(form, `We sent a message to ${email}. Open it to carry on.`);
 		}
-		// Every account made here is a shopper; staff accounts are made by the owner.
-		await db.insert(users).values({ name, email, passwordHash: await hashPassword(password), role: 'shopper' });
+		await createShopper(db, { name, email, password });
 		const next = safeNext(event.url.searchParams.get('next'), '/account');
 		const outcome = await signInWith(event, 'credentials', { email, password }, next);
 		if (!outcome.ok)

@@ -1,13 +1,12 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { eq } from 'drizzle-orm';
 import { linkSignInSchema, passwordSignInSchema } from '$lib/forms/auth';
 import { signInWith } from '$lib/server/auth/actions';
 import { signInContext } from '$lib/server/auth/context';
 import { messageForError, SIGN_IN_MESSAGES } from '$lib/server/auth/messages';
 import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
+import { roleOf } from '$lib/server/auth/accounts';
 import { safeNext } from '$lib/server/origin';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -46,8 +45,7 @@ export const actions: Actions = {
 		}
 		// Send each role to its own start page unless a page asked for the sign-in.
 		if (next) redirect(303, next);
-		const [u] = await db.select({ role: users.role }).from(users).where(eq(users.email, form.data.email)).limit(1);
-		redirect(303, landing(u?.role ?? 'shopper'));
+		redirect(303, landing((await roleOf(db, form.data.email)) ?? 'shopper'));
 	},
 	link: async (event) => {
 		const linkForm = await superValidate(event.request, zod4(linkSignInSchema));

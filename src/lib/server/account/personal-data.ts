@@ -16,7 +16,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 	return {
 		exportedAt: new Date().toISOString(),
 		account: user,
-		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
+		measureCards: cards.map((c) => ({ name: c.name, waistCm: c.waist, hipCm: c.hip, lengthCm: c.length, waistToHipCm: c.waistToHip, waistToKneeCm: c.waistToKnee, fitAdjustmentsCm: c.adjustments, units: c.units, consentAt: c.consentAt, updatedAt: c.updatedAt })),
 		orders: myOrders.map((o) => ({
 			number: o.number,
 			stage: o.status,
@@ -24,7 +24,7 @@ export async function exportPersonalData(db: Db, userId: string) {
 			total: o.total,
 			currency: o.currency,
 			shippingAddress: o.shippingAddress,
-			skirts: lines.filter((l) => l.orderId === o.id).map((l) => ({ options: l.options, measurementsCm: l.measurements, draftedFigures: l.figures }))
+			skirts: lines.filter((l) => l.orderId === o.id).map((l) => ({ options: l.options, measurementsCm: l.measurements, fitAdjustmentsCm: l.adjustments, draftedFigures: l.figures }))
 		}))
 	};
 }

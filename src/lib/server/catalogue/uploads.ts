@@ -2,10 +2,12 @@
 // visitor's word only: the bytes decide what it is, and only a PNG, JPEG or WebP photo is kept,
 // re-drawn by sharp as a WebP of at most 800 × 800 (which also drops EXIF data such as GPS).
 import sharp from 'sharp';
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { db } from '../db';
+import type { Db } from '../db/client';
 import { uploads } from '../db/schema';
-import { deleteUpload, saveUpload } from './storage';
+import { deleteUpload, readUpload, saveUpload } from './storage';
+import { failure, type Failure } from '$lib/failure';
 
 export const SWATCH_LIMITS = {
 	bytes: 5 * 1024 * 1024,
@@ -26,15 +28,16 @@ const NAMES: Record<string, string> = {
 };
 const USE = 'Use a PNG, JPEG or WebP photo.';
 
-export type Refusal = { ok: false; message: string };
+/** A refused file: 400, or 413 when it is too large. */
+export type Refusal = Failure;
 export type PreparedSwatch = { ok: true; bytes: Uint8Array; width: number; height: number; from: string };
 
 const mb = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB`;
 
 /** Decides by content whether the bytes are a photo we take, and re-encodes them. Stores nothing. */
 export async function prepareSwatch(input: Uint8Array): Promise<PreparedSwatch | Refusal> {
-	if (input.byteLength === 0) return { ok: false, message: `The file is empty. ${USE}` };
-	if (input.byteLength > SWATCH_LIMITS.bytes) return { ok: false, message: tooLarge(input.byteLength) };
+	if (input.byteLength === 0) return failure(400, `The file is empty. ${USE}`);
+	if (input.byteLength > SWATCH_LIMITS.bytes) return failure(413, tooLarge(input.byteLength));
 	let format: string | undefined;
 	let pixels = 0;
 	try {
@@ -42,15 +45,16 @@ export async function prepareSwatch(input: Uint8Array): Promise<PreparedSwatch |
 		format = meta.format;
 		pixels = (meta.width ?? 0) * (meta.height ?? 0);
 	} catch {
-		return { ok: false, message: `This file is not a picture we can read, whatever its name says. ${USE}` };
+		return failure(400, `This file is not a picture we can read, whatever its name says. ${USE}`);
 	}
 	if (!format || !ACCEPTED[format]) {
 		const what = (format && NAMES[format]) ?? (format ? `a ${format.toUpperCase()} file` : 'not a photo');
-		return { ok: false, message: `This file is ${what} inside, whatever its name says. ${USE}` };
+		return failure(400, `This file is ${what} inside, whatever its name says. ${USE}`);
 	}
 	if (pixels > SWATCH_LIMITS.pixels)
 		return {
 			ok: false,
+			status: 400,
 			message: `This picture is ${Math.round(pixels / 1e6)} megapixels: at most ${SWATCH_LIMITS.pixels / 1e6} are taken. Save it smaller and try again.`
 		};
 	try {
@@ -64,6 +68,7 @@ export async function prepareSwatch(input: Uint8Array): Promise<PreparedSwatch |
 	} catch {
 		return {
 			ok: false,
+			status: 400,
 			message: `This ${ACCEPTED[format]} file seems damaged: we could not read the picture in it. Save it again and retry.`
 		};
 	}
@@ -84,7 +89,7 @@ export type AcceptedSwatch = {
  */
 export async function acceptSwatch(file: File, ownerId: string | null = null): Promise<AcceptedSwatch | Refusal> {
 	// File.size is known before the bytes are read into memory for sharp.
-	if (file.size > SWATCH_LIMITS.bytes) return { ok: false, message: tooLarge(file.size) };
+	if (file.size > SWATCH_LIMITS.bytes) return failure(413, tooLarge(file.size));
 	const prepared = await prepareSwatch(new Uint8Array(await file.arrayBuffer()));
 	if (!prepared.ok) return prepared;
 	const { key } = await saveUpload(prepared.bytes, { mime: 'image/webp', ext: 'webp' });
@@ -114,4 +119,15 @@ export async function discardUpload(id: number) {
 	await deleteUpload(row.key).catch(() => {
 		/* an orphan file harms nobody: the row, which serves it, is gone */
 	});
+}
+
+/** A swatch's stored file and type, or null. Only swatches are public; other uploads never come out here. */
+export async function swatchFile(db: Db, id: number) {
+	const [row] = await db
+		.select({ key: uploads.storageKey, mime: uploads.mime })
+		.from(uploads)
+		.where(and(eq(uploads.id, id), eq(uploads.purpose, 'swatch')))
+		.limit(1);
+	const bytes = row ? await readUpload(row.key) : null;
+	return row && bytes ? { mime: row.mime, bytes } : null;
 }

@@ -17,14 +17,30 @@ export const RULE_FIELDS = [
 	{ path: 'darts.length.front', label: 'Front dart length', help: '' },
 	{ path: 'darts.maxIntake', label: 'Largest dart', help: 'Beyond this a second dart shares the intake.' },
 	{ path: 'darts.minIntake', label: 'Smallest dart', help: 'A smaller dart is left out and the side seam takes it.' },
+	{ path: 'darts.maxAngle', label: 'Widest dart angle', help: 'Degrees at the dart point. Past about 25° the cloth puckers at the point; a larger intake is split or lengthened.', unit: '°', step: 1 },
+	{ path: 'darts.maxCount', label: 'Most darts on a quarter panel', help: 'A whole number, 1 to 4. Beyond them the side seam takes the rest.', unit: 'darts', step: 1 },
+	{ path: 'darts.lengthGrowth.from', label: 'Darts grow longer from an intake of', help: 'A dart taking more than this grows longer with its intake.' },
+	{ path: 'darts.lengthGrowth.perCm', label: 'Dart length added per cm of intake', help: 'cm of length for each cm of intake past the figure above (1.5 is 15 mm per cm).', unit: 'cm/cm', step: 0.05 },
+	{ path: 'darts.backShare', label: 'Share of extra intake at the back', help: 'Of the dart intake beyond the usual, the part the back darts take: 0.6 is 60 %. The seat wants it more than the front.', unit: 'share', step: 0.05 },
 	{ path: 'defaultWaistToHip', label: 'Waist to hip when unknown', help: 'Used, and said so, when a shopper does not know hers.' },
+	{ path: 'kneeDepth', label: 'Waist to knee when unknown', help: 'Used, and said so, when a shopper skips it: decides the vent, where a pencil skirt stops tapering and "past the knee". Handbook size 12: 58.5.' },
+	{ path: 'vent.reachAboveKnee', label: 'Vent top above the knee', help: 'On a fitted skirt past the knee the vent opens to this far above the knee, so she can stride.' },
+	{ path: 'vent.pencilAboveKnee', label: 'Pencil skirt needs no vent above', help: 'A pencil hem more than this above the knee is short enough to walk in without one.' },
+	{ path: 'lining.slitAbove', label: 'Lining slit above the vent top', help: 'The lining stays open this much higher than the vent, so it never holds the vent shut.' },
 	{ path: 'allowances.seam', label: 'Seam allowance', help: 'European patterns 1.5 cm; US ⅝ in.' },
 	{ path: 'allowances.zipSeam', label: 'Zip seam allowance', help: '' },
 	{ path: 'allowances.hem', label: 'Hem allowance', help: 'Circle skirts use their own narrow hem.' },
 	{ path: 'waistband.width', label: 'Waistband width (finished)', help: '' },
 	{ path: 'waistband.underlap', label: 'Waistband underlap', help: '' },
 	{ path: 'fabric.saleStep', label: 'Fabric sold in steps of', help: 'The fabric estimate rounds up to this.' }
-] as const;
+] as const satisfies readonly { path: string; label: string; help: string; unit?: string; step?: number }[];
+
+/** What the form checks beyond the engine's ranges: a count of darts is a whole number. */
+export function ruleFormProblems(rules: HouseRules): Record<string, string> {
+	const out: Record<string, string> = {};
+	if (!Number.isInteger(rules.darts?.maxCount)) out['darts.maxCount'] = 'The most darts on a quarter panel is a whole number, from 1 to 4.';
+	return out;
+}
 
 export function getPath(obj: unknown, path: string): unknown {
 	return path.split('.').reduce<unknown>((o, k) => (o && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), obj);

@@ -102,6 +102,7 @@ async function insertOrder(db: Db, quoted: Placed[], shopper: Shopper, money: { 
 				// Stretch comes from the cloth; kept with the order so a reprinted ticket drafts the same vent.
 				options: { style: q.draft.choice.style, ...q.item.options, stretch: q.fabric.stretch },
 				measurements: storedMeasurements(q.item.measurements),
+				adjustments: q.item.measurements.adjustments ?? null,
 				figures: q.draft.figures,
 				fabricCm: q.fabricCm,
 				pricing: q.pricing,

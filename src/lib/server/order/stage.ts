@@ -72,3 +72,8 @@ export async function moveLocked(tx: Tx, order: OrderRow, input: MoveInput): Pro
 	});
 	return { order: { ...order, status: input.to, ...input.set }, mailIds };
 }
+
+/** A note on the order's timeline, for the team. */
+export async function addNote(db: Db, orderId: number, actor: Actor, note: string) {
+	await db.insert(orderEvents).values({ orderId, actorId: actor.id, actorLabel: actor.label, kind: 'note', note });
+}

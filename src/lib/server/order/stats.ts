@@ -35,3 +35,12 @@ export async function overdueCount(db: Db) {
 		.where(and(inArray(orders.status, [...OPEN_WORK_STAGES]), lt(orders.promisedDate, sql`CURRENT_DATE()`)));
 	return row.n;
 }
+
+/** Money taken in the last `days` days, after refunds (orders paid in that time). */
+export async function takingsSince(db: Db, days: number) {
+	const [row] = await db
+		.select({ total: sql<number>`COALESCE(SUM(${orders.total} - ${orders.refundedTotal}), 0)` })
+		.from(orders)
+		.where(sql`${orders.paidAt} IS NOT NULL AND ${orders.paidAt} >= DATE_SUB(CURRENT_DATE(), INTERVAL ${days} DAY)`);
+	return Number(row?.total ?? 0);
+}

@@ -8,7 +8,7 @@ import { fabrics, orderEvents, orderLines, orders, payments, styles } from '../d
 
 function linesOf(db: Db, id: number) {
 	return db
-		.select({ id: orderLines.id, style: styles.name, fabric: fabrics.name, colour: fabrics.colour, widthCm: fabrics.widthCm, stockCm: fabrics.stockCm, nap: fabrics.nap, measurements: orderLines.measurements, figures: orderLines.figures, fabricCm: orderLines.fabricCm, lineTotal: orderLines.lineTotal })
+		.select({ id: orderLines.id, style: styles.name, fabric: fabrics.name, colour: fabrics.colour, widthCm: fabrics.widthCm, stockCm: fabrics.stockCm, nap: fabrics.nap, measurements: orderLines.measurements, adjustments: orderLines.adjustments, figures: orderLines.figures, fabricCm: orderLines.fabricCm, lineTotal: orderLines.lineTotal })
 		.from(orderLines)
 		.innerJoin(styles, eq(styles.id, orderLines.styleId))
 		.innerJoin(fabrics, eq(fabrics.id, orderLines.fabricId))

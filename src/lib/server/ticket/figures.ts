@@ -54,7 +54,8 @@ export function blockFigures(doc: Doc, t: Ticket, f: Frame, top: number): number
 		rows.push([`Dart ${i + 1}: intake`, dartCell(b, i, 'intake'), dartCell(fr, i, 'intake')]);
 		rows.push([`Dart ${i + 1}: length`, dartCell(b, i, 'length'), dartCell(fr, i, 'length')]);
 	}
-	let y = heading(doc, 'Block figures, each panel (on the seam line, no allowances)', x, top, wl);
+	const half = t.draft.left ? ', her right half' : '';
+	let y = heading(doc, `Block figures, each panel${half} (on the seam line, no allowances)`, x, top, wl);
 	y = table(doc, x, y, [x + wl * 0.78, x + wl], rows, { label: wl * 0.64, step: ROW, head: ['Back', 'Front'] });
 	const style = t.draft.style;
 	const note =

@@ -6,7 +6,7 @@ import { STAGE_LABELS } from '../../orders/stages';
 import { drawQr } from './qr';
 import { INK, PENCIL, THREAD, heading, line, rule, table } from './text';
 import type { Ticket } from './ticket';
-import { optionRows, styleKindName } from './words';
+import { adjustmentWords, halvesWords, kneeWords, optionRows, styleKindName } from './words';
 
 type Doc = PDFKit.PDFDocument;
 
@@ -92,9 +92,14 @@ function measurements(doc: Doc, t: Ticket, x: number, w: number, top: number): n
 			'Waist to hip',
 			g.waistToHip === null ? `not given: ${formatCm(t.draft.measurements.hipDepth)} used` : formatCm(g.waistToHip)
 		],
+		['Waist to knee', g.waistToKnee === null || g.waistToKnee === undefined ? kneeWords(t.draft) : formatCm(g.waistToKnee)],
 		['Skirt length', formatCm(g.length)]
 	];
 	y = pairs(doc, rows, x, w, y);
+	if (g.confirmed) {
+		line(doc, 'Figures confirmed by the shopper: fit in calico first.', x, y + 8, { size: 6.5, color: THREAD, maxWidth: w });
+		y += ROW;
+	}
 	line(doc, 'Length at the side, waist to hem.', x, y + 8, { size: 6.5, color: PENCIL, maxWidth: w });
 	return y + ROW;
 }
@@ -151,4 +156,18 @@ export function facts(doc: Doc, t: Ticket, f: Frame, top: number): number {
 	const b = workingValues(doc, t, f.left + w1 + gap, w2, top);
 	const c = options(doc, t, f.left + w1 + w2 + 2 * gap, w3, top);
 	return Math.max(a, b, c) + 6;
+}
+
+/** The fit adjustments drafted into the line, and each half's figures for a figure drafted in two;
+ * nothing when there are none. Returns the y below. */
+export function fitAdjustments(doc: Doc, t: Ticket, f: Frame, top: number): number {
+	const words = adjustmentWords(t.draft);
+	if (!words.length) return top;
+	const W = f.right - f.left;
+	let y = heading(doc, 'Fit adjustments, drafted in', f.left, top, W);
+	for (const w of [...words, ...halvesWords(t.draft)]) {
+		line(doc, w, f.left, y + 8, { size: 7.5, maxWidth: W });
+		y += ROW;
+	}
+	return y + 6;
 }

@@ -9,7 +9,7 @@ import { registerLora } from '../fonts/lora';
 import { GAP, placeOf, planPieces, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
 import { markerScale } from '../../drafting/drawing/marker';
 import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOff } from './lower';
-import { banners, facts, header, type Frame } from './page-one';
+import { banners, facts, fitAdjustments, header, type Frame } from './page-one';
 import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
 import { MM, heading } from './text';
 import type { Ticket } from './ticket';
@@ -67,6 +67,7 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 	let y = header(doc, t, f, o.origin);
 	y = banners(doc, t, f, y);
 	y = facts(doc, t, f, y);
+	y = fitAdjustments(doc, t, f, y);
 	y = blockFigures(doc, t, f, y);
 	y = pieceList(doc, t, f, y);
 	footer(doc, t, f, 1, pages);

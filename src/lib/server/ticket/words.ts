@@ -1,6 +1,6 @@
 // The ticket's words for the engine's values: options, edges, stages. Trade terms as the trade has them.
-import type { Edge, Piece, ResolvedChoice } from '../../drafting';
-import { STYLES, formatCm } from '../../drafting';
+import type { Draft, Edge, Piece, ResolvedChoice } from '../../drafting';
+import { STYLES, fitWords, formatCm } from '../../drafting';
 
 export const styleKindName = (id: string) => STYLES.find((s) => s.id === id)?.name ?? id;
 
@@ -50,7 +50,8 @@ export function optionRows(c: ResolvedChoice, waistbandWidth: number, facingDept
 		c.vent === 'none' ? 'None' : `${c.vent === 'vent' ? 'Back vent' : 'Kick pleat'}, ${formatCm(c.ventLength)}`;
 	rows.push(['Vent', vent]);
 	rows.push(['Lining', c.lining ? 'Yes' : 'No']);
-	rows.push(['Pockets', c.pockets ? 'In-seam, both sides' : 'No']);
+	// With the zip in the left side seam the pocket moves to the right one (the engine drafts one bag pair).
+	rows.push(['Pockets', !c.pockets ? 'No' : c.closure.position === 'side' ? 'In-seam, right side only (zip in the left)' : 'In-seam, both sides']);
 	rows.push(['Hem', `${formatCm(c.hemDepth)} turned up`]);
 	rows.push(['Stretch fabric', c.stretch ? 'Yes' : 'No']);
 	return rows;
@@ -61,4 +62,23 @@ export function cutSize(p: Piece): string {
 	const w = formatCm(p.bounds.maxX - p.bounds.minX).replace(' cm', '');
 	const h = formatCm(p.bounds.maxY - p.bounds.minY).replace(' cm', '');
 	return `${w} × ${h}`;
+}
+
+/** The knee as drafted: her own, or the house default said so ("house default 58.5 cm"). */
+export function kneeWords(d: Draft): string {
+	return d.measurements.kneeAssumed ? `house default ${formatCm(d.measurements.kneeDepth)}` : formatCm(d.measurements.kneeDepth);
+}
+
+/** The fit adjustments drafted into the line, one sentence each (none: an empty list). */
+export const adjustmentWords = (d: Draft): string[] => fitWords(d.measurements.fit, formatCm);
+
+/** For a figure drafted in two halves: each half's block figures, back / front, in one line each. */
+export function halvesWords(d: Draft): string[] {
+	if (!d.left || !d.measurements.fit.oneHip) return [];
+	const n = (v: number) => formatCm(v).replace(' cm', '');
+	const half = (name: string, f: Draft['figures']) => {
+		const darts = (p: { darts: { intake: number }[] }) => (p.darts.length ? p.darts.map((x) => n(x.intake)).join(' + ') : 'none');
+		return `${name}: hip width ${n(f.back.hipWidth)} / ${n(f.front.hipWidth)} · waist seam ${n(f.check.waistSeam.back)} / ${n(f.check.waistSeam.front)} · side raise ${n(f.back.sideRaise)} / ${n(f.front.sideRaise)} · darts ${darts(f.back)} / ${darts(f.front)} cm`;
+	};
+	return ['Two halves drafted apart (back / front, cm):', half('Her right half', d.figures), half('Her left half', d.left.figures)];
 }

@@ -3,6 +3,8 @@ import { and, desc, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { measurementProfiles, orders } from '$lib/server/db/schema';
 import { deleteMeasurements } from '$lib/server/account/personal-data';
+import { currentRules } from '$lib/server/house/rules';
+import { checkCardFit, readCardFit } from '$lib/forms/card';
 import type { Actions, PageServerLoad } from './$types';
 import { requireRole, SIGNED_IN } from '$lib/server/access';
 
@@ -10,7 +12,7 @@ export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
 	const [cards, myOrders] = await Promise.all([
 		db
-			.select({ id: measurementProfiles.id, name: measurementProfiles.name, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip })
+			.select({ id: measurementProfiles.id, name: measurementProfiles.name, units: measurementProfiles.units, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, waistToKnee: measurementProfiles.waistToKnee, adjustments: measurementProfiles.adjustments })
 			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
 		db
 			.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })
@@ -19,10 +21,25 @@ export const load: PageServerLoad = async (event) => {
 			.orderBy(desc(orders.createdAt))
 			.limit(5)
 	]);
-	return { cards, orders: myOrders };
+	return { cards, orders: myOrders, defaultKnee: (await currentRules(db)).rules.kneeDepth };
 };
 
 export const actions: Actions = {
+	// The knee length and the fit adjustments of one of her cards; nothing changes unless all are right.
+	saveFit: async (event) => {
+		const user = requireRole(event, SIGNED_IN);
+		const data = await event.request.formData();
+		const id = Number(data.get('id'));
+		const none = 'We found no measure card of yours with that number, so nothing was changed.';
+		if (!Number.isSafeInteger(id) || id <= 0) return fail(404, { message: none });
+		const [card] = await db.select().from(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		if (!card) return fail(404, { message: none });
+		const { values, errors } = readCardFit(data);
+		const checked = checkCardFit(card, values, errors);
+		if (!checked.ok) return fail(400, { cardId: id, values, errors: checked.errors, message: 'Some values need a second look: nothing was changed.' });
+		await db.update(measurementProfiles).set({ waistToKnee: checked.waistToKnee, adjustments: checked.adjustments }).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		return { cardId: id, message: `Measure card “${card.name}” saved.` };
+	},
 	deleteCard: async (event) => {
 		const user = requireRole(event, SIGNED_IN);
 		const id = Number((await event.request.formData()).get('id'));

@@ -1,4 +1,4 @@
-import { catalogueLists } from './catalogue.server';
+import { catalogueLists } from '$lib/server/catalogue/forms';
 import type { PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

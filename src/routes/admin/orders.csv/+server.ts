@@ -1,4 +1,5 @@
 import { db } from '$lib/server/db';
+import { plainAmount } from '$lib/format';
 import { allOrders, readFilter, toCsv } from '$lib/server/order/owner-list';
 import type { RequestHandler } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
@@ -8,7 +9,8 @@ export const GET: RequestHandler = async (event) => {
 	requireRole(event, OWNER);
 	const rows = await allOrders(db, readFilter(event.url));
 	const csv = toCsv(
-		rows.map((r) => ({ ...r, total: (r.total / 100).toFixed(2), refundedTotal: (r.refundedTotal / 100).toFixed(2) })),
+		// Plain decimals in each order's own currency (its column beside them): what a spreadsheet sums.
+		rows.map((r) => ({ ...r, total: plainAmount(r.total, r.currency), refundedTotal: plainAmount(r.refundedTotal, r.currency) })),
 		['number', 'createdAt', 'status', 'shopperName', 'email', 'currency', 'total', 'refundedTotal', 'promisedDate']
 	);
 	return new Response(csv, {

@@ -1,7 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
-import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/house/rules-form';
+import { RULE_FIELDS, getPath, ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
 import { houseRules, users } from '$lib/server/db/schema';
 import { currentRules } from '$lib/server/house/rules';
@@ -20,7 +20,7 @@ export const load: PageServerLoad = async (event) => {
 		.limit(20);
 	return {
 		version: id,
-		fields: RULE_FIELDS.map((f) => ({ ...f, value: getPath(rules, f.path) as number })),
+		fields: RULE_FIELDS.map((f) => ({ path: f.path, label: f.label, help: f.help, unit: 'unit' in f ? f.unit : 'cm', step: 'step' in f ? f.step : 0.1, value: getPath(rules, f.path) as number })),
 		drawing: sampleDrawing('straight', rules, id, 'block'),
 		versions
 	};
@@ -34,7 +34,10 @@ export const actions: Actions = {
 		const { rules: base } = await currentRules(db);
 		let rules;
 		try {
-			rules = resolveRules(rulesFromForm(form, base));
+			const posted = rulesFromForm(form, base);
+			const whole = ruleFormProblems(posted);
+			if (Object.keys(whole).length) return fail(400, { message: 'Some rules are out of range.', errors: whole });
+			rules = resolveRules(posted);
 		} catch (err) {
 			if (err instanceof DraftInputError) return fail(400, { message: 'Some rules are out of range.', errors: Object.fromEntries(err.fields.map((f) => [f.field.replace(/^rules\./, ''), f.message])) });
 			throw err;

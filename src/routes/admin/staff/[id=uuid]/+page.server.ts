@@ -1,16 +1,14 @@
 import { error, fail as kitFail } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
-import { sessions, users, verificationTokens } from '$lib/server/db/schema';
+import { accountById, setRole, switchOff, switchOn } from '$lib/server/account/staff';
 import { roleSchema, ROLE_CHOICES } from '$lib/forms/staff';
-import { endSessions } from '$lib/server/auth/sessions';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
 async function accountFor(id: string) {
-	const [row] = id.length <= 255 ? await db.select().from(users).where(eq(users.id, id)).limit(1) : [];
+	const row = await accountById(db, id);
 	if (!row) error(404, 'There is no such account.');
 	return row;
 }
@@ -45,7 +43,7 @@ export const actions: Actions = {
 		if (u.id === me.id) return message(form, SELF, { status: 403 });
 		if (!form.valid) return fail(400, { form });
 		if (form.data.role === u.role) return setError(form, 'role', `${u.name ?? u.email} is a ${u.role} already.`);
-		await db.update(users).set({ role: form.data.role }).where(eq(users.id, u.id));
+		await setRole(db, u.id, form.data.role);
 		form.data.confirm = false;
 		const label = ROLE_CHOICES.find((c) => c.id === form.data.role)!.label.toLowerCase();
 		return message(form, `${u.name ?? u.email} is a ${label} now. It counts from their next click.`);
@@ -58,13 +56,7 @@ export const actions: Actions = {
 		if (!confirmed)
 			return kitFail(400, { message: 'Tick the box to confirm: switching an account off signs them out at once.' });
 		if (u.disabledAt) return kitFail(409, { message: 'This account is switched off already.' });
-		await db.update(users).set({ disabledAt: new Date() }).where(eq(users.id, u.id));
-		// Their session is checked against the database on every request, so they are out now; raising
-		// the session version keeps their old cookies out even once the account is switched back on.
-		// Any sign-in link still in their inbox goes too.
-		await endSessions(db, u.id);
-		await db.delete(sessions).where(eq(sessions.userId, u.id));
-		if (u.email) await db.delete(verificationTokens).where(eq(verificationTokens.identifier, u.email));
+		await switchOff(db, u);
 		return {
 			notice: `Switched off. ${u.name ?? u.email} is signed out and cannot sign in until you switch the account back on.`
 		};
@@ -74,7 +66,7 @@ export const actions: Actions = {
 		const u = await accountFor(event.params.id);
 		if (u.id === me.id) return kitFail(403, { message: SELF });
 		if (!u.disabledAt) return kitFail(409, { message: 'This account is switched on already.' });
-		await db.update(users).set({ disabledAt: null }).where(eq(users.id, u.id));
+		await switchOn(db, u.id);
 		return { notice: `Switched back on. ${u.name ?? u.email} can sign in again.` };
 	}
 };

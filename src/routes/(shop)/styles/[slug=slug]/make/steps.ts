@@ -16,6 +16,11 @@ export const MEASURE_STEPS = [
 		how: 'Down the side of your body, from your waist line to the level where you took your hip measurement. Tie a ribbon round your waist to mark it.'
 	},
 	{
+		field: 'waistToKnee',
+		label: 'Waist to knee',
+		how: 'Down the side of your leg, from your waist line to the middle of your knee cap, standing straight. It tells us where a long fitted skirt needs its vent to open so you can walk. You may skip it.'
+	},
+	{
 		field: 'length',
 		label: 'Skirt length',
 		how: 'Down the side, from your waist line to where you want the hem to fall. Wear the shoes you mean to wear with the skirt.'

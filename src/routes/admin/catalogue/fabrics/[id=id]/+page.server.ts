@@ -1,18 +1,17 @@
 import { error, fail } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
-import { fabrics } from '$lib/server/db/schema';
+import { fabricById, setRetired } from '$lib/server/catalogue/entries';
 import { fabricSchema } from '$lib/forms/catalogue';
-import { fabricFormData, idParam } from '../../catalogue.server';
-import { saveFabric } from '../../fabric-save.server';
+import { fabricFormData, idParam } from '$lib/server/catalogue/forms';
+import { saveFabric } from '$lib/server/catalogue/fabric-save';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
 async function fabricFor(idText: string) {
 	const id = idParam(idText);
-	const [row] = id ? await db.select().from(fabrics).where(eq(fabrics.id, id)).limit(1) : [];
+	const row = await fabricById(db, id);
 	if (!row) error(404, 'There is no such fabric in the catalogue.');
 	return row;
 }
@@ -39,22 +38,12 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		return saveFabric(event, await fabricFor(event.params.id));
 	},
-	retire: async (event) => {
-		requireRole(event, OWNER);
-		const { params } = event;
-		const fabric = await fabricFor(params.id);
-		if (fabric.retiredAt) return fail(409, { message: 'This fabric is retired already.' });
-		await db.update(fabrics).set({ retiredAt: new Date() }).where(eq(fabrics.id, fabric.id));
-		return {
-			notice: `Retired. Shoppers no longer see ${fabric.name}, ${fabric.colour}; orders already placed keep it.`
-		};
-	},
-	restore: async (event) => {
-		requireRole(event, OWNER);
-		const { params } = event;
-		const fabric = await fabricFor(params.id);
-		if (!fabric.retiredAt) return fail(409, { message: 'This fabric is in the shop already.' });
-		await db.update(fabrics).set({ retiredAt: null }).where(eq(fabrics.id, fabric.id));
-		return { notice: `Back in the shop: ${fabric.name}, ${fabric.colour}.` };
-	}
+	retire: (event) => retireOrRestore(event, true),
+	restore: (event) => retireOrRestore(event, false)
 };
+
+async function retireOrRestore(event: Parameters<Actions['retire']>[0], retire: boolean) {
+	requireRole(event, OWNER);
+	const done = await setRetired(db, { kind: 'fabric', row: await fabricFor(event.params.id) }, retire);
+	return done.ok ? { notice: done.notice } : fail(done.status, { message: done.message });
+}

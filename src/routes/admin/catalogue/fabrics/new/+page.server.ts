@@ -1,7 +1,7 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { fabricSchema } from '$lib/forms/catalogue';
-import { saveFabric } from '../../fabric-save.server';
+import { saveFabric } from '$lib/server/catalogue/fabric-save';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

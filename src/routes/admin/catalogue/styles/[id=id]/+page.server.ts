@@ -1,18 +1,17 @@
 import { error, fail } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
-import { styles } from '$lib/server/db/schema';
+import { styleById, setRetired } from '$lib/server/catalogue/entries';
 import { styleSchema } from '$lib/forms/catalogue';
-import { idParam, styleFormData } from '../../catalogue.server';
-import { saveStyle } from '../../style-save.server';
+import { idParam, styleFormData } from '$lib/server/catalogue/forms';
+import { saveStyle } from '$lib/server/catalogue/style-save';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 
 async function styleFor(idText: string) {
 	const id = idParam(idText);
-	const [row] = id ? await db.select().from(styles).where(eq(styles.id, id)).limit(1) : [];
+	const row = await styleById(db, id);
 	if (!row) error(404, 'There is no such style in the catalogue.');
 	return row;
 }
@@ -33,20 +32,12 @@ export const actions: Actions = {
 		requireRole(event, OWNER);
 		return saveStyle(event, await styleFor(event.params.id));
 	},
-	retire: async (event) => {
-		requireRole(event, OWNER);
-		const { params } = event;
-		const style = await styleFor(params.id);
-		if (style.retiredAt) return fail(409, { message: 'This style is retired already.' });
-		await db.update(styles).set({ retiredAt: new Date() }).where(eq(styles.id, style.id));
-		return { notice: `Retired. ${style.name} is no longer in the shop; orders already placed keep it.` };
-	},
-	restore: async (event) => {
-		requireRole(event, OWNER);
-		const { params } = event;
-		const style = await styleFor(params.id);
-		if (!style.retiredAt) return fail(409, { message: 'This style is in the shop already.' });
-		await db.update(styles).set({ retiredAt: null }).where(eq(styles.id, style.id));
-		return { notice: `Back in the shop: ${style.name}.` };
-	}
+	retire: (event) => retireOrRestore(event, true),
+	restore: (event) => retireOrRestore(event, false)
 };
+
+async function retireOrRestore(event: Parameters<Actions['retire']>[0], retire: boolean) {
+	requireRole(event, OWNER);
+	const done = await setRetired(db, { kind: 'style', row: await styleFor(event.params.id) }, retire);
+	return done.ok ? { notice: done.notice } : fail(done.status, { message: done.message });
+}

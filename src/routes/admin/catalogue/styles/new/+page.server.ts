@@ -1,7 +1,7 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { styleSchema } from '$lib/forms/catalogue';
-import { saveStyle } from '../../style-save.server';
+import { saveStyle } from '$lib/server/catalogue/style-save';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
 

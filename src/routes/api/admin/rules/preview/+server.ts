@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { DraftInputError, draftSkirt, resolveRules, toSvg } from '$lib/drafting';
 import { fieldErrors } from '$lib/forms/errors';
 import type { FailureAnswer, RulesPreviewAnswer } from '$lib/server/api/answers';
-import { rulesFromForm } from '$lib/server/house/rules-form';
+import { ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { rulesPreviewSchema } from '$lib/server/house/rules-preview';
 import { db } from '$lib/server/db';
 import { currentRules } from '$lib/server/house/rules';
@@ -18,7 +18,10 @@ export const POST: RequestHandler = async (event) => {
 	const parsed = rulesPreviewSchema.safeParse(body);
 	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) } satisfies FailureAnswer, { status: 400 });
 	try {
-		const rules = resolveRules(rulesFromForm(parsed.data, (await currentRules(db)).rules));
+		const posted = rulesFromForm(parsed.data, (await currentRules(db)).rules);
+		const whole = ruleFormProblems(posted);
+		if (Object.keys(whole).length) return json({ message: Object.values(whole).join(' '), fields: Object.fromEntries(Object.entries(whole).map(([k, v]) => [k, [v]])) } satisfies FailureAnswer, { status: 400 });
+		const rules = resolveRules(posted);
 		const draft = draftSkirt(SAMPLE_FIGURE, { style: 'straight' }, rules);
 		return json({ svg: toSvg(draft, { view: 'block', units: 'cm' }), figures: draft.figures, warnings: draft.warnings } satisfies RulesPreviewAnswer);
 	} catch (err) {

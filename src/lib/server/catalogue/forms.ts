@@ -1,4 +1,4 @@
-// Between the catalogue forms (text, euros, metres) and the database rows (cents, centimetres).
+// Between the catalogue forms (text, amounts in the shop's currency, metres) and the database rows (minor units, centimetres).
 import { and, asc, eq, isNotNull, isNull, like, ne, or } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { fabrics, styles, type StyleOptionPrices } from '$lib/server/db/schema';

@@ -7,7 +7,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { fabrics } from '$lib/server/db/schema';
 import { acceptSwatch, discardUpload, tooLarge } from '$lib/server/catalogue/uploads';
-import { fabricFormData, fabricValues, newFabricSlug } from './catalogue.server';
+import { fabricFormData, fabricValues, newFabricSlug } from './forms';
 import { fabricSchema, MAX_SWATCH_BYTES } from '$lib/forms/catalogue';
 
 type Fabric = typeof fabrics.$inferSelect;

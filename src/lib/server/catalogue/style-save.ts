@@ -4,7 +4,7 @@ import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { styles } from '$lib/server/db/schema';
-import { styleSlugTaken, styleValues } from './catalogue.server';
+import { styleSlugTaken, styleValues } from './forms';
 import { styleSchema } from '$lib/forms/catalogue';
 
 function isDuplicate(e: unknown): boolean {
