@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
 import { env } from '$env/dynamic/private';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';
@@ -52,6 +53,6 @@ export const POST: RequestHandler = async ({ request, locals, url, getClientAddr
 	void deliverQueued(placed.mailIds);
 	const payment = await startPayment(db, stripe(), placed.order.id, env.ORIGIN ?? url.origin);
 	// The order stands; the client can open its payment page later from the order's own link.
-	if (!payment.ok) return json({ number: placed.order.number, message: payment.message }, { status: 503 });
-	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url }, { status: 201 });
+	if (!payment.ok) return json({ number: placed.order.number, message: payment.message } satisfies PaymentAwayAnswer, { status: 503 });
+	return json({ number: placed.order.number, total: placed.order.total, currency: placed.order.currency, paymentUrl: payment.url } satisfies PlacedOrderAnswer, { status: 201 });
 };

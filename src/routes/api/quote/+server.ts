@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { QuoteAnswer } from '$lib/server/api/answers';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';
 import { quoteSchema, toCm } from '$lib/forms/quote';
@@ -21,5 +22,5 @@ export const POST: RequestHandler = async ({ request }) => {
 	const q = parsed.data;
 	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource });
 	if (!result.ok) return failureJson(asBodyFailure(result));
-	return json(result.quote);
+	return json(result.quote satisfies QuoteAnswer);
 };

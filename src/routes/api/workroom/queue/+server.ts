@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { QueueAnswer } from '$lib/server/api/answers';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { workQueue } from '$lib/server/order/queue';
@@ -7,5 +8,5 @@ import type { RequestHandler } from './$types';
 // The queue page polls this so the list stays current without a reload.
 export const GET: RequestHandler = async (event) => {
 	requireRole(event, STAFF);
-	return json({ queue: await workQueue(db, ['paid', 'altering']), at: new Date().toISOString() });
+	return json({ queue: await workQueue(db, ['paid', 'altering']), at: new Date().toISOString() } satisfies QueueAnswer);
 };

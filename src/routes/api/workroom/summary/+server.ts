@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { SummaryAnswer } from '$lib/server/api/answers';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { lowStockFabrics, stageCounts } from '$lib/server/order/stats';
@@ -8,5 +9,5 @@ import type { RequestHandler } from './$types';
 export const GET: RequestHandler = async (event) => {
 	requireRole(event, STAFF);
 	const [counts, lowStock] = await Promise.all([stageCounts(db), lowStockFabrics(db)]);
-	return json({ stages: Object.fromEntries(counts.map((c) => [c.stage, c.count])), lowStock });
+	return json({ stages: Object.fromEntries(counts.map((c) => [c.stage, c.count])), lowStock } satisfies SummaryAnswer);
 };

@@ -1,4 +1,5 @@
 import { json } from '@sveltejs/kit';
+import type { FailureAnswer, StageMovedAnswer } from '$lib/server/api/answers';
 import { fieldErrors } from '$lib/forms/errors';
 import { stageSchema } from '$lib/forms/stage';
 import { requireRole, STAFF } from '$lib/server/access';
@@ -14,9 +15,9 @@ export const POST: RequestHandler = async (event) => {
 	const id = Number(event.params.id);
 	const body = await event.request.json().catch(() => null);
 	const parsed = stageSchema.safeParse(body);
-	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) }, { status: 400 });
+	if (!parsed.success) return json({ message: 'Some values need a second look.', fields: fieldErrors(parsed.error) } satisfies FailureAnswer, { status: 400 });
 	const result = await workroomMove(db, { orderId: id, ...parsed.data, actor: { id: user.id, label: user.name, role: user.role } });
-	if (!result.ok) return json({ message: result.message }, { status: result.status });
+	if (!result.ok) return json({ message: result.message } satisfies FailureAnswer, { status: result.status });
 	void deliverQueued(result.mailIds);
-	return json({ id, status: result.order.status });
+	return json({ id, status: result.order.status } satisfies StageMovedAnswer);
 };
