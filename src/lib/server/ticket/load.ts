@@ -38,6 +38,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					options: orderLines.options,
 					figures: orderLines.figures,
 					fabricCm: orderLines.fabricCm,
+					cutterLay: orderLines.cutterLay,
 					styleName: styles.name,
 					fabric: {
 						name: fabrics.name,
@@ -46,7 +47,8 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 						widthCm: fabrics.widthCm,
 						nap: fabrics.nap,
 						stretch: fabrics.stretch,
-						shrinkagePct: fabrics.shrinkagePct
+						shrinkagePct: fabrics.shrinkagePct,
+						shrinkageAcrossPct: fabrics.shrinkageAcrossPct
 					}
 				})
 				.from(orderLines)
@@ -80,7 +82,8 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					measurements: l.measurements,
 					options: l.options,
 					figures: l.figures,
-					fabricCm: l.fabricCm
+					fabricCm: l.fabricCm,
+					cutterLay: l.cutterLay
 				},
 				fabric: l.fabric
 			})

@@ -13,6 +13,8 @@ import {
 	type SkirtChoiceInput
 } from '../../drafting';
 import type { OrderStage } from '../../orders/stages';
+import type { StoredCutterLay } from '../db/schema';
+import { clothOf, cutterLayFits } from '../workroom/cloth';
 
 /** The cloth as the workroom has it on the shelf. */
 export interface TicketFabric {
@@ -23,6 +25,8 @@ export interface TicketFabric {
 	nap: boolean;
 	stretch: boolean;
 	shrinkagePct: number;
+	/** Shrinkage across when it differs from along; null or absent: the one value applies to both. */
+	shrinkageAcrossPct?: number | null;
 }
 
 /** The measurements as the shopper gave them (cm); a missing waist-to-hip depth stays null. */
@@ -50,6 +54,8 @@ export interface Ticket {
 	/** The shell fabric to cut, or why it could not be laid (a fabric narrower than a piece). */
 	estimate: FabricEstimate | null;
 	estimateProblem: string | null;
+	/** The lay drawn is the cutter's (a longer search, stored with the order), not the quote's. */
+	cutterLay: boolean;
 	/** Fabric length priced with the order (cm), for comparison with today's estimate. */
 	orderedCm: number | null;
 	/** The re-drafted figures agree with those stored at order time (null when none were stored). */
@@ -74,6 +80,8 @@ export interface TicketInput {
 		options: Record<string, unknown>;
 		figures?: unknown;
 		fabricCm?: number | null;
+		/** The cutter's lay stored with the line (drawn instead of a fresh quote lay when it fits the cloth). */
+		cutterLay?: StoredCutterLay | null;
 	};
 	fabric: TicketFabric;
 }
@@ -98,15 +106,24 @@ export function sameFigures(a: unknown, b: unknown): boolean {
 	return a === b;
 }
 
-/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
-export function makeTicket(input: TicketInput): Ticket {
-	const m = input.line.measurements;
-	const given: GivenMeasurements = {
+/** The shopper's given measurements of a stored order line. */
+export function givenOf(m: Record<string, number | null | undefined>): GivenMeasurements {
+	return {
 		waist: Number(m.waist),
 		hip: Number(m.hip),
 		length: Number(m.length),
 		waistToHip: typeof m.waistToHip === 'number' ? m.waistToHip : null
 	};
+}
+
+/** Re-drafts a stored order line with the house rules it was ordered under. Throws DraftInputError when
+ * the stored input no longer drafts. */
+export function redraftLine(
+	line: { measurements: Record<string, number | null | undefined>; options: Record<string, unknown> },
+	rules: HouseRulesInput | HouseRules,
+	fabric: { stretch: boolean }
+): Draft {
+	const given = givenOf(line.measurements);
 	const measurements: Measurements = {
 		waist: given.waist,
 		hip: given.hip,
@@ -114,19 +131,26 @@ export function makeTicket(input: TicketInput): Ticket {
 		...(given.waistToHip === null ? {} : { waistToHip: given.waistToHip })
 	};
 	// The shop drafts with the fabric's stretch when the options do not say (a stretch knit needs no vent).
-	const options = { stretch: input.fabric.stretch, ...input.line.options } as SkirtChoiceInput;
-	const draft = draftSkirt(measurements, options, input.rules);
+	const options = { stretch: fabric.stretch, ...line.options } as SkirtChoiceInput;
+	return draftSkirt(measurements, options, rules);
+}
+
+/** Re-drafts an order line and lays its fabric. Throws DraftInputError when the stored input no longer drafts. */
+export function makeTicket(input: TicketInput): Ticket {
+	const given = givenOf(input.line.measurements);
+	const draft = redraftLine(input.line, input.rules, input.fabric);
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
-	try {
-		estimate = estimateFabric(draft, {
-			width: input.fabric.widthCm,
-			nap: input.fabric.nap,
-			shrinkage: input.fabric.shrinkagePct
-		});
-	} catch (e) {
-		estimateProblem = e instanceof Error ? e.message : String(e);
-	}
+	const stored = input.line.cutterLay;
+	const facts = { ...input.fabric, shrinkageAcrossPct: input.fabric.shrinkageAcrossPct ?? null };
+	const useStored = cutterLayFits(stored, facts);
+	if (useStored) estimate = { length: stored.length, need: stored.need, layout: stored.layout };
+	else
+		try {
+			estimate = estimateFabric(draft, clothOf(facts));
+		} catch (e) {
+			estimateProblem = e instanceof Error ? e.message : String(e);
+		}
 	return {
 		orderId: input.orderId,
 		number: input.number,
@@ -141,6 +165,7 @@ export function makeTicket(input: TicketInput): Ticket {
 		fabric: input.fabric,
 		estimate,
 		estimateProblem,
+		cutterLay: useStored,
 		orderedCm: input.line.fabricCm ?? null,
 		figuresAgree:
 			input.line.figures === undefined || input.line.figures === null
