@@ -1,6 +1,7 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
+import { clothOf } from '../workroom/cloth';
 import { DraftInputError, draftSkirt, estimateFabric, toSvg, type StyleId } from '../../drafting';
 import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
 import { OPEN_WORK_STAGES } from '../../orders/stages';
@@ -41,7 +42,7 @@ export async function quoteSkirt(db: Db, input: QuoteInput, opts: { drawing?: bo
 		throw err;
 	}
 
-	const estimate = fabric ? estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct }) : null;
+	const estimate = fabric ? estimateFabric(draft, clothOf(fabric)) : null;
 	const price = estimate && fabric ? priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: input.options, optionPrices: style.optionPrices }) : null;
 	const shipping = price ? shippingCost(price.total, settings.shipping) : null;
 	return {
