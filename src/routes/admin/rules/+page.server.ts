@@ -1,7 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
-import { RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/admin/rules-form';
+import { CHOICE_FIELDS, RULE_FIELDS, getPath, rulesFromForm } from '$lib/server/admin/rules-form';
 import { db } from '$lib/server/db';
 import { houseRules, users } from '$lib/server/db/schema';
 import { currentRules } from '$lib/server/shop/rules';
@@ -21,6 +21,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		version: id,
 		fields: RULE_FIELDS.map((f) => ({ ...f, value: getPath(rules, f.path) as number })),
+		choices: CHOICE_FIELDS.map((f) => ({ ...f, value: getPath(rules, f.path) as string })),
 		drawing: sampleDrawing('straight', rules, id, 'block'),
 		versions
 	};
