@@ -25,9 +25,9 @@ async function stopStack() {
 onShutdown(stopStack);
 
 /** Runs the in-process engine measures in a child (TypeScript through tsx) and parses its JSON line. */
-function draftBench() {
+function draftBench(script = 'tests/bench/draft.ts') {
 	return new Promise((resolve, reject) => {
-		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/bench/draft.ts'], {
+		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', script], {
 			cwd: ROOT,
 			stdio: ['ignore', 'pipe', 'pipe']
 		});
@@ -81,7 +81,10 @@ async function main() {
 	const env = s.testEnv;
 
 	// The engine alone first, while the app sits idle.
-	const draft = await measure('draft: in-process engine timings (tsx)', draftBench);
+	const draft = await measure('draft: in-process engine timings (tsx)', () => draftBench());
+	// The skirts' lays before (row lays) and after (quote, cutter), and the seeded queue laid together.
+	const lays = await measure('lays: the three skirts and the seeded queue laid together (tsx)', () => draftBench('tests/bench/lays.ts'));
+	console.log(`  lays: ${JSON.stringify(lays)}`);
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
