@@ -13,15 +13,19 @@ import { currentUser } from '$lib/server/hooks/user';
 import { startOutboxWorker, stopOutboxWorker } from '$lib/server/mail';
 import { startJobWorker, stopJobWorker } from '$lib/server/outputs/worker';
 import { pool } from '$lib/server/db';
+import { startCutterLayWorker, stopCutterLayWorker } from '$lib/server/order/cutter-lays';
 
 if (!building) {
 	startOutboxWorker();
 	startJobWorker();
+	// The cutter's lays of paid orders, a few seconds of search each, stored with the order.
+	startCutterLayWorker(Number(env.CUTTER_LAY_INTERVAL_MS ?? 5_000), Number(env.CUTTER_LAY_SECONDS ?? 3));
 	// adapter-node emits this once the HTTP server has closed: the open database connections would
 	// otherwise keep the process alive after SIGTERM.
 	process.once('sveltekit:shutdown', () => {
 		stopOutboxWorker();
 		stopJobWorker();
+		stopCutterLayWorker();
 		void pool.end().catch(() => {});
 	});
 }

@@ -30,7 +30,7 @@ async function main() {
 	if (!['unit', 'integration', 'e2e'].some(wants)) return;
 	// Unit tests need no running system; the others get a whole one of their own.
 	// Mail retries fast in tests, so an outage test does not wait minutes.
-	if (wants('integration') || wants('e2e')) stack = await startStack({ name: 'test', quiet: !process.env.QL_TEST_APP_LOG, appEnv: { OUTBOX_INTERVAL_MS: '500', OUTBOX_RETRY_SCALE: '0.02', JOBS_INTERVAL_MS: '300' } });
+	if (wants('integration') || wants('e2e')) stack = await startStack({ name: 'test', quiet: !process.env.QL_TEST_APP_LOG, appEnv: { OUTBOX_INTERVAL_MS: '500', OUTBOX_RETRY_SCALE: '0.02', JOBS_INTERVAL_MS: '300', CUTTER_LAY_SECONDS: '0.5' } });
 	const work = stack?.work ?? mkdtempSync(join(tmpdir(), 'quarterline-unit-'));
 	const testEnv = { ...stack?.testEnv, QL_TEST: '1' };
 

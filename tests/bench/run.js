@@ -86,6 +86,9 @@ async function main() {
 	const draft = await measure('draft: in-process engine timings (tsx)', () => draftBench());
 	const outputs = await measure('outputs: full-size pattern PDFs, in process (tsx)', () => draftBench('tests/bench/outputs.ts'));
 	const dxf = await measure('DXF: one order drafted and written, in process (tsx)', () => draftBench('tests/bench/dxf.ts'));
+	// The skirts' lays before (row lays) and after (quote, cutter), and the seeded queue laid together.
+	const lays = await measure('lays: the three skirts and the seeded queue laid together (tsx)', () => draftBench('tests/bench/lays.ts'));
+	console.log(`  lays: ${JSON.stringify(lays)}`);
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);

@@ -37,6 +37,7 @@ const ROUTES: Row[] = [
 	{ route: '/account/data', path: '/account/data', expect: SIGNED_IN },
 	{ route: '/workroom', path: '/workroom', expect: WORKROOM },
 	{ route: '/workroom/lays', path: '/workroom/lays', expect: WORKROOM },
+	{ route: '/workroom/lays/[id=id]', path: '/workroom/lays/999999', expect: { anonymous: 303, shopper: 403, cutter: 404, owner: 404 } },
 	{ route: '/workroom/orders/[id=id]', path: '/workroom/orders/1', expect: WORKROOM },
 	{ route: '/workroom/orders/[id=id]/ticket.pdf', path: '/workroom/orders/1/ticket.pdf', expect: WORKROOM },
 	{ route: '/workroom/tickets.pdf', path: '/workroom/tickets.pdf?ids=1,2', expect: WORKROOM },

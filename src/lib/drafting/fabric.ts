@@ -209,9 +209,50 @@ function bestOfKind(pieces: Piece[], kind: Variant, width: number, nap: boolean,
 /** Checks fabric options; throws DraftInputError naming each bad field. */
 export const checkFabric = (o: FabricOptions) => check(o);
 
+// The quote's lays, most recently used kept: the same pieces on the same cloth under the same rules always
+// give the same lay (the search is deterministic), so a repeated quote (a page reloaded, the bag priced
+// again, the order placed after its quote, many shoppers with one size) is answered without nesting. Keyed
+// by the pieces' cutting lines to 0.01 mm, the cloth and the rules the lay reads. A Map keeps insertion
+// order, which is all an LRU needs; a package for 20 lines was not worth the dependency.
+const LAY_CACHE_SIZE = 256;
+const layCache = new Map<string, FabricEstimate>();
+/** Empties the quote's lay cache (the bench times a cold lay with it). */
+export function clearLayCache() {
+	layCache.clear();
+}
+
+function cacheKey(pieces: Piece[], options: FabricOptions, rules: HouseRules): string {
+	const r = (v: number) => Math.round(v * 1e4);
+	const parts: (string | number)[] = [options.width, options.nap ? 1 : 0, options.shrinkage, options.shrinkageAcross ?? -1, JSON.stringify(rules.fabric), rules.allowances.seam];
+	for (const p of pieces) {
+		parts.push('|', p.id, p.name, p.role, p.cut.onFold ? 1 : 0, p.cut.count);
+		for (const s of p.cutting.segments) {
+			parts.push(r(s.from.x), r(s.from.y));
+			if (s.kind === 'cubic') parts.push(r(s.c1.x), r(s.c1.y), r(s.c2.x), r(s.c2.y));
+		}
+		for (const n of p.notches) parts.push(n.label ?? '', r(n.at.x), r(n.at.y));
+	}
+	return parts.join(',');
+}
+
 /** The fabric to buy for a draft at a given width. Throws DraftInputError when a piece is wider than the fabric. */
 export function estimateFabric(draft: Draft, options: FabricOptions): FabricEstimate {
 	check(options);
+	const pieces = draft.pieces.filter((p) => p.fabric === (options.fabric ?? 'shell'));
+	const key = cacheKey(pieces, options, draft.rules);
+	const hit = layCache.get(key);
+	if (hit) {
+		layCache.delete(key);
+		layCache.set(key, hit);
+		return hit;
+	}
+	const est = estimateUncached(draft, options);
+	layCache.set(key, est);
+	if (layCache.size > LAY_CACHE_SIZE) layCache.delete(layCache.keys().next().value!);
+	return est;
+}
+
+function estimateUncached(draft: Draft, options: FabricOptions): FabricEstimate {
 	const { width, nap, shrinkage } = options;
 	const across = options.shrinkageAcross ?? shrinkage;
 	// Cloth shrinks across as well as along: the pieces must fit the width it will have.

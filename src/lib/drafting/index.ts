@@ -50,7 +50,7 @@
  */
 export { draftSkirt, type Draft } from './draft';
 export { estimateFabric, saleLength, type FabricEstimate, type FabricOptions, type Layout, type LayoutPiece } from './fabric';
-export { combinedLay, cutterLay, type CombinedLay, type CutterLay, type LayOrder, type SearchOptions } from './nest/cutter';
+export { combinedLay, combinedLayInSlices, cutterLay, cutterLayInSlices, type Pause, type CombinedLay, type CutterLay, type LayOrder, type SearchOptions } from './nest/cutter';
 export { toSvg, type SvgOptions } from './svg';
 export { CM_PER_INCH, cmToIn, formatCm, formatInches, formatLength, inToCm, type Units } from './units';
 export { DEFAULT_RULES, DEFAULT_RULES_INCH, resolveRules, type FrontBack, type HouseRules, type HouseRulesInput, type SuppressionRule } from './rules';

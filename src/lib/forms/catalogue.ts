@@ -29,6 +29,7 @@ export const RULES = {
 	width: { label: 'width', decimals: 1, min: 50, max: 330, unit: 'cm', example: '150' },
 	stock: { label: 'stock', decimals: 3, min: 0, max: 99_999, unit: 'metres', example: '12.5' },
 	shrinkage: { label: 'shrinkage', decimals: 1, min: 0, max: 20, unit: '%', example: '3' },
+	shrinkageAcross: { label: 'shrinkage across', decimals: 1, min: 0, max: 20, unit: '%', example: '2' },
 	leadDays: { label: 'lead time', decimals: 0, min: 1, max: 120, unit: 'days', example: '7' },
 	sortOrder: { label: 'place in the list', decimals: 0, min: 0, max: 999, unit: '', example: '10' }
 } satisfies Record<string, AmountRule>;
@@ -88,6 +89,14 @@ export const fabricSchema = z.object({
 	nap: z.boolean().default(false),
 	stretch: z.boolean().default(false),
 	shrinkagePct: amount(RULES.shrinkage),
+	// Left empty: the lengthwise figure applies across as well.
+	shrinkageAcrossPct: z
+		.string()
+		.trim()
+		.superRefine((v, ctx) => {
+			const problem = v === '' ? null : amountProblem(v, RULES.shrinkageAcross);
+			if (problem) ctx.addIssue({ code: 'custom', message: problem });
+		}),
 	// Checked here for size only (the browser can do that before sending); what is inside the file
 	// is decided on the server, from its bytes.
 	image: z

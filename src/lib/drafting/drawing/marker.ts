@@ -4,7 +4,7 @@
 // of paper (`u` cm each), so the same marker reads at 1:25 on a ticket or at full size.
 import type { Layout } from '../fabric';
 import { formatCm } from '../units';
-import { ptPerCm, through, type Mark, type Measure } from './model';
+import { ptPerCm, through, type Drawing, type Mark, type Measure } from './model';
 import { arrowhead, scaleBar } from './symbols';
 
 /** The band across the lay the pieces take (a piece may reach past the fold's edge when laid whole). */
@@ -172,4 +172,20 @@ export function labelPoint(poly: Pt[], placed: Pt[], size: number): Pt {
 			if (s > score) [best, score] = [q, s];
 		}
 	return best;
+}
+
+/** The marker as a whole drawing (for the SVG back end): sized as if printed `widthPt` points wide, so its
+ * words and the "Scale 1:n" line are true for a print of that size; a screen scales it to its column. */
+export function markerDrawing(layout: Layout, title: string, numberOf: (pieceId: string) => number, measure: Measure, widthPt = 780): Drawing {
+	const lane = laneOf(layout);
+	const H = lane.max - lane.min;
+	const heightPt = Math.max(160, (H / Math.max(layout.layLength, 1)) * widthPt + MARKER_PAD.top + MARKER_PAD.bottom + 30);
+	const scale = markerScale(layout, widthPt, heightPt);
+	const u = 1 / ptPerCm(scale);
+	const P = MARKER_PAD;
+	const x0 = -P.left * u;
+	const y0 = -P.top * u;
+	const x1 = Math.max(layout.layLength + P.right * u, 92 * u + 180 * u);
+	const y1 = H + (P.bottom + (needsLegend(layout) ? 12 : 0)) * u;
+	return { title, box: { x: x0, y: y0, w: x1 - x0, h: y1 - y0 }, marks: markerMarks(layout, scale, u, measure, numberOf) };
 }

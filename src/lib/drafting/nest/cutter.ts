@@ -23,6 +23,33 @@ export interface SearchOptions {
 	/** Bound on lays tried; with it and a seed the result is the same on every machine. */
 	evaluations?: number;
 	seed?: number;
+	/** Seconds of search between pauses, for the `…InSlices` forms (default 0.1). */
+	slice?: number;
+}
+
+/** Something a sliced search awaits between slices (a server lets other requests in). */
+export type Pause = () => Promise<void>;
+
+// A search that must not hold a server's one thread for seconds (the cutter's lay after payment, a
+// combined lay made from the lays view) runs as a generator: it yields after every slice of `slice`
+// seconds, and each slice goes on from the best order and ways of lying found so far. One form runs it in
+// one go (tests, the bench), the other awaits a pause between slices. A worker thread would be the other
+// way, but adapter-node's build gives no separate entry to start one from.
+type Steps<T> = Generator<void, T, void>;
+
+function runSteps<T>(steps: Steps<T>): T {
+	for (;;) {
+		const r = steps.next();
+		if (r.done) return r.value;
+	}
+}
+
+async function runStepsPaused<T>(steps: Steps<T>, pause: Pause): Promise<T> {
+	for (;;) {
+		const r = steps.next();
+		if (r.done) return r.value;
+		await pause();
+	}
 }
 
 /** The cutter's lay and what it takes: the estimate (same shape as the quote's) and the search's figures. */
@@ -59,28 +86,53 @@ function kindsFor(groups: LayPiece[][], usable: number): LayKind[] {
 	return kinds.length ? kinds : widest('seamed') <= usable ? ['seamed'] : [];
 }
 
-/** Searches every kind of lay for its share of the time; the shortest wins. */
-function search(
+/** Searches every kind of lay for its share of the time; the shortest wins. Sliced when `opts.slice` is
+ * given (yielding between slices), else each kind in one call. */
+function* search(
 	groups: LayPiece[][],
 	usable: number,
 	nap: boolean,
 	gap: number,
 	opts: SearchOptions,
-	seconds: number
-): PieceLay | null {
+	seconds: number,
+	sliced = false
+): Steps<PieceLay | null> {
 	const kinds = kindsFor(groups, usable);
 	let best: PieceLay | null = null;
 	for (const kind of kinds) {
 		const lane = kind === 'folded' ? usable / 2 : usable;
-		const lay = layPieces(groups, kind, lane, nap, {
+		const total = (opts.seconds ?? seconds) / kinds.length;
+		const effort = {
 			band: CUTTER_BAND,
 			gap,
 			seed: opts.seed ?? 1,
-			seconds: (opts.seconds ?? seconds) / kinds.length,
 			evaluations: opts.evaluations !== undefined ? Math.ceil(opts.evaluations / kinds.length) : undefined,
 			coarseBand: 2,
 			coarseShare: 0.5
-		});
+		};
+		let lay: PieceLay | null;
+		if (!sliced) lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: total });
+		else {
+			const slice = Math.max(0.02, opts.slice ?? 0.1);
+			const started = Date.now();
+			lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: Math.min(slice, total), evaluations: undefined });
+			let k = 1;
+			while (lay && (Date.now() - started) / 1000 < total - 1e-3) {
+				yield;
+				const left = total - (Date.now() - started) / 1000;
+				if (left <= 0) break;
+				const next = layPieces(groups, kind, lane, nap, {
+					band: CUTTER_BAND,
+					gap,
+					seed: (opts.seed ?? 1) + k++,
+					seconds: Math.min(slice, left),
+					starts: [{ order: lay.order, choice: lay.choice }]
+				});
+				if (next && next.length <= lay.length + 1e-9) lay = { ...next, evaluations: lay.evaluations + next.evaluations };
+				else lay = { ...lay, evaluations: lay.evaluations + (next?.evaluations ?? 0) };
+			}
+			yield;
+		}
 		if (lay && (!best || lay.length < best.length - 1e-9)) best = lay;
 	}
 	return best;
@@ -110,6 +162,15 @@ function layoutOf(lay: PieceLay, width: number, usable: number, notes: string[])
 /** The cutter's lay for one order: a search of a few seconds on the exact width left after shrinking;
  * never longer than the quote's lay (which is kept when the search finds nothing shorter). */
 export function cutterLay(draft: Draft, fabric: FabricOptions, opts: SearchOptions = {}): CutterLay {
+	return runSteps(cutterSteps(draft, fabric, opts, false));
+}
+
+/** The same search in slices, awaiting `pause` between them (for a server's background work). */
+export function cutterLayInSlices(draft: Draft, fabric: FabricOptions, opts: SearchOptions, pause: Pause): Promise<CutterLay> {
+	return runStepsPaused(cutterSteps(draft, fabric, opts, true), pause);
+}
+
+function* cutterSteps(draft: Draft, fabric: FabricOptions, opts: SearchOptions, sliced: boolean): Steps<CutterLay> {
 	const quote = estimateFabric(draft, fabric);
 	const pieces = shellPieces(draft, fabric);
 	const across = fabric.shrinkageAcross ?? fabric.shrinkage;
@@ -124,9 +185,9 @@ export function cutterLay(draft: Draft, fabric: FabricOptions, opts: SearchOptio
 				evaluations: opts.evaluations !== undefined ? Math.ceil(opts.evaluations / 2) : undefined
 			}
 		: opts;
-	let best = search([whole], usable, fabric.nap, rules.fabric.gap, share, 3);
+	let best = yield* search([whole], usable, fabric.nap, rules.fabric.gap, share, 3, sliced);
 	if (pieced) {
-		const other = search([pieced], usable, fabric.nap, rules.fabric.gap, share, 3);
+		const other = yield* search([pieced], usable, fabric.nap, rules.fabric.gap, share, 3, sliced);
 		if (other && (!best || other.length < best.length - 1e-9)) best = other;
 	}
 	const area = quote.layout.pieces.reduce((a, p) => a + polygonArea(p.outline), 0);
@@ -178,6 +239,15 @@ export interface CombinedLay {
 
 /** Lays several orders' pieces (one cloth) together. Each piece keeps its order's index in `group`. */
 export function combinedLay(orders: LayOrder[], fabric: FabricOptions, opts: SearchOptions = {}): CombinedLay {
+	return runSteps(combinedSteps(orders, fabric, opts, false));
+}
+
+/** The same lay in slices, awaiting `pause` between them (made from a request without holding the server). */
+export function combinedLayInSlices(orders: LayOrder[], fabric: FabricOptions, opts: SearchOptions, pause: Pause): Promise<CombinedLay> {
+	return runStepsPaused(combinedSteps(orders, fabric, opts, true), pause);
+}
+
+function* combinedSteps(orders: LayOrder[], fabric: FabricOptions, opts: SearchOptions, sliced: boolean): Steps<CombinedLay> {
 	checkFabric(fabric);
 	if (!orders.length) throw new DraftInputError([{ field: 'orders', message: 'Choose at least one order to lay.' }]);
 	const across = fabric.shrinkageAcross ?? fabric.shrinkage;
@@ -187,7 +257,7 @@ export function combinedLay(orders: LayOrder[], fabric: FabricOptions, opts: Sea
 		(o) => layPiecesOf(shellPieces(o.draft, fabric), o.draft.rules.allowances.seam, 'none').whole
 	);
 	const rules = orders[0].draft.rules;
-	const best = search(groups, usable, fabric.nap, rules.fabric.gap, opts, 8);
+	const best = yield* search(groups, usable, fabric.nap, rules.fabric.gap, opts, 8, sliced);
 	if (!best)
 		throw new DraftInputError([{ field: 'width', message: 'Some piece of these orders is wider than the fabric.' }]);
 	const need = (best.length + rules.fabric.endAllowance) / (1 - fabric.shrinkage / 100);

@@ -48,9 +48,9 @@ export const quoteAnswer = z
 	.strictObject({
 		style: z.strictObject({ slug: z.string(), name: z.string(), kind: z.string().meta({ description: 'The block the style is drafted from: straight, pencil, a-line, half-circle, full-circle or gored.' }) }),
 		figures: figuresAnswer,
+		figuresSource: z.enum(['measured', 'size_chart', 'flat_garment']).meta({ description: 'Where the figures came from: her own tape, a published size chart, or a skirt that fits her laid flat.' }),
 		warnings: z.array(z.string()).meta({ description: 'Plain sentences for the shopper (an assumed hip depth, a vent added).' }),
 		pieces: z.array(z.strictObject({ name: z.string(), cut: z.strictObject({ count: z.number().int(), onFold: z.boolean() }) })),
-		drawing: z.string().nullable().meta({ description: 'The pattern pieces as an SVG document, in the units asked for.' }),
 		fabric: z
 			.strictObject({ id: z.number().int(), name: z.string(), widthCm: z.number(), lengthCm: cm('Cloth to buy, rounded up to the step it is sold in'), inStock: z.boolean() })
 			.nullable()

@@ -47,7 +47,7 @@ export const OPERATIONS: Operation[] = [
 		path: '/api/quote',
 		tag: 'Shop',
 		summary: 'Draft and price one skirt',
-		description: `Anyone may ask. \`style\` is a style's **slug** as the catalogue lists it (the demo atelier's: ${slugs}), not its kind or name: \`"straight"\` answers 400. Measurements are in \`units\` (cm unless \`"in"\`); leave \`waistToHip\` out or null when unknown and the house default is used, and said so in \`warnings\`. Without \`fabricId\` the answer has figures and a drawing but no fabric length or price.`,
+		description: `Anyone may ask. \`style\` is a style's **slug** as the catalogue lists it (the demo atelier's: ${slugs}), not its kind or name: \`"straight"\` answers 400. Measurements are in \`units\` (cm unless \`"in"\`); leave \`waistToHip\` out or null when unknown and the house default is used, and said so in \`warnings\`. Without \`fabricId\` the answer has the figures but no fabric length or price. It sends no drawing: the shop drafts and draws in the browser with the same engine.`,
 		body: { schema: quoteSchema.meta({ id: 'QuoteRequest' }), description: 'The measurements and choices of one skirt.' },
 		answers: { 200: { description: 'The skirt drafted and priced.', schema: answers.quoteAnswer }, 400: failure('Malformed JSON, a value out of range, or a style or fabric the shop does not have; `fields` names each.'), 403: CROSS_SITE, 503: DB_AWAY },
 		examples: examples.QUOTE_EXAMPLES

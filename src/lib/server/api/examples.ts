@@ -33,9 +33,9 @@ export const QUOTE_EXAMPLES: Record<string, Example> = {
 		answer: {
 			style: { slug: 'rue-straight', name: 'Rue straight skirt', kind: 'straight' },
 			figures: straight.figures,
+			figuresSource: 'measured',
 			warnings: straight.warnings,
 			pieces,
-			drawing,
 			fabric: { id: 1, name: 'Harbour wool twill', widthCm: 150, lengthCm: 80, inStock: true },
 			price: { fabric: 3040, making: 8900, options: 0, shipping: 950, total: 12_890, currency: 'EUR' },
 			shipBy: '2026-12-14'
@@ -48,9 +48,9 @@ export const QUOTE_EXAMPLES: Record<string, Example> = {
 		answer: {
 			style: { slug: 'quill-pencil', name: 'Quill pencil skirt', kind: 'pencil' },
 			figures: straight.figures,
+			figuresSource: 'measured',
 			warnings: ['We used a waist-to-hip depth of 20.5 cm: measure yours for a closer fit.'],
 			pieces,
-			drawing,
 			fabric: null,
 			price: null,
 			shipBy: '2026-12-15'

@@ -59,7 +59,8 @@ export function fabricValues(f: FabricForm) {
 		stockCm: scaled(f.stockMetres, 3) / 10,
 		nap: f.nap,
 		stretch: f.stretch,
-		shrinkagePct: scaled(f.shrinkagePct, 1) / 10
+		shrinkagePct: scaled(f.shrinkagePct, 1) / 10,
+		shrinkageAcrossPct: f.shrinkageAcrossPct === '' ? null : scaled(f.shrinkageAcrossPct, 1) / 10
 	};
 }
 
@@ -76,6 +77,7 @@ export function fabricFormData(row: typeof fabrics.$inferSelect): FabricForm {
 		nap: row.nap,
 		stretch: row.stretch,
 		shrinkagePct: numberToText(row.shrinkagePct, 1),
+		shrinkageAcrossPct: row.shrinkageAcrossPct === null ? '' : numberToText(row.shrinkageAcrossPct, 1),
 		image: undefined,
 		removeImage: false
 	};

@@ -21,6 +21,7 @@ import type { Figures } from '../../drafting/block';
 import type { HouseRulesInput } from '../../drafting/rules';
 import type { StyleId } from '../../drafting/options';
 import type { Erased, LinePricing, StoredChoice, StoredMeasurements } from '../order/lines';
+import type { Layout } from '../../drafting/fabric';
 
 /** Where a set of figures came from (issue: a way in without a tape measure). */
 export const FIGURE_SOURCES = ['measured', 'size_chart', 'flat_garment'] as const;
@@ -210,6 +211,8 @@ export const fabrics = mysqlTable(
 		nap: boolean('nap').notNull().default(false),
 		stretch: boolean('stretch').notNull().default(false),
 		shrinkagePct: decimal('shrinkage_pct', { precision: 4, scale: 1, mode: 'number' }).notNull().default(0),
+		// Shrinkage across the width when it differs from along the length; null: the one value applies to both.
+		shrinkageAcrossPct: decimal('shrinkage_across_pct', { precision: 4, scale: 1, mode: 'number' }),
 		imageUploadId: int('image_upload_id').references(() => uploads.id, { onDelete: 'set null' }),
 		retiredAt: timestamp('retired_at', { fsp: 3 }),
 		createdAt: created(),
@@ -306,6 +309,9 @@ export const orderLines = mysqlTable(
 		figures: json('figures').$type<Figures | Erased>().notNull(),
 		fabricCm: cm('fabric_cm', 6).notNull(),
 		pricing: json('pricing').$type<LinePricing>().notNull(),
+		// The cutter's lay, searched in the background after payment (a few seconds, not in a request), with
+		// the cloth facts it was laid for: a later change of the cloth makes it stale and it is laid again.
+		cutterLay: json('cutter_lay').$type<StoredCutterLay>(),
 		lineTotal: int('line_total').notNull(),
 		createdAt: created()
 	},
@@ -314,6 +320,59 @@ export const orderLines = mysqlTable(
 		index('order_line_style_idx').on(t.styleId),
 		index('order_line_fabric_idx').on(t.fabricId)
 	]
+);
+
+/** A cutter's lay as stored with its order line (the Layout the ticket draws, cm). */
+export type StoredCutterLay = {
+	length: number;
+	need: number;
+	utilisation: number;
+	evaluations: number;
+	seconds: number;
+	layout: Layout;
+	cloth: { width: number; nap: boolean; shrinkage: number; shrinkageAcross: number };
+};
+
+/** Per order line of a combined lay: its order and what it would take cut on its own (cm). */
+export type CombinedLayLine = { lineId: number; orderId: number; number: string; group: number; aloneCm: number };
+
+// A combined lay: several paid orders of one cloth laid together, kept so it can be reopened, drawn at
+// full scale, and marked cut once (the stock taken off is `length_cm`, the whole lay's).
+export const combinedLays = mysqlTable(
+	'combined_lay',
+	{
+		id: int('id').autoincrement().primaryKey(),
+		fabricId: int('fabric_id')
+			.notNull()
+			.references(() => fabrics.id),
+		status: mysqlEnum('status', ['open', 'cut']).notNull().default('open'),
+		lengthCm: cm('length_cm', 7).notNull(),
+		layCm: cm('lay_cm', 7).notNull(),
+		savedCm: cm('saved_cm', 7).notNull(),
+		utilisation: decimal('utilisation', { precision: 5, scale: 4, mode: 'number' }).notNull(),
+		layout: json('layout').$type<Layout>().notNull(),
+		lines: json('lines').$type<CombinedLayLine[]>().notNull(),
+		createdBy: varchar('created_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		createdByLabel: varchar('created_by_label', { length: 120 }).notNull(),
+		cutBy: varchar('cut_by', { length: 255 }).references(() => users.id, { onDelete: 'set null' }),
+		cutByLabel: varchar('cut_by_label', { length: 120 }),
+		cutAt: timestamp('cut_at', { fsp: 3 }),
+		createdAt: created()
+	},
+	(t) => [index('combined_lay_fabric_idx').on(t.fabricId, t.status)]
+);
+
+export const combinedLayOrders = mysqlTable(
+	'combined_lay_order',
+	{
+		layId: int('lay_id')
+			.notNull()
+			.references(() => combinedLays.id, { onDelete: 'cascade' }),
+		orderId: int('order_id')
+			.notNull()
+			.references(() => orders.id, { onDelete: 'cascade' })
+	},
+	(t) => [primaryKey({ columns: [t.layId, t.orderId] }), index('combined_lay_order_order_idx').on(t.orderId)]
 );
 
 export const orderEvents = mysqlTable(

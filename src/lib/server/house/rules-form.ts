@@ -32,7 +32,9 @@ export const RULE_FIELDS = [
 	{ path: 'allowances.hem', label: 'Hem allowance', help: 'Circle skirts use their own narrow hem.' },
 	{ path: 'waistband.width', label: 'Waistband width (finished)', help: '' },
 	{ path: 'waistband.underlap', label: 'Waistband underlap', help: '' },
-	{ path: 'fabric.saleStep', label: 'Fabric sold in steps of', help: 'The fabric estimate rounds up to this.' }
+	{ path: 'fabric.saleStep', label: 'Fabric sold in steps of', help: 'The fabric estimate rounds up to this.' },
+	// Lays (nesting): the room left between pieces.
+	{ path: 'fabric.gap', label: 'Gap between pieces on a lay', help: 'Room for the shears between neighbouring pieces (0 to 3 cm).' }
 ] as const satisfies readonly { path: string; label: string; help: string; unit?: string; step?: number }[];
 
 /** What the form checks beyond the engine's ranges: a count of darts is a whole number. */
@@ -41,6 +43,19 @@ export function ruleFormProblems(rules: HouseRules): Record<string, string> {
 	if (!Number.isInteger(rules.darts?.maxCount)) out['darts.maxCount'] = 'The most darts on a quarter panel is a whole number, from 1 to 4.';
 	return out;
 }
+
+/** House rules chosen from a short list (a select on the form), by dotted path. */
+export const CHOICE_FIELDS = [
+	{
+		path: 'fabric.bandJoin',
+		label: 'A waistband longer than the lay',
+		help: 'May be cut in two and joined, when that makes the lay shorter; a seam allowance is added each side of the join.',
+		options: [
+			{ value: 'side-seam', label: 'Joined at a side seam' },
+			{ value: 'none', label: 'Always cut in one piece' }
+		]
+	}
+] as const;
 
 export function getPath(obj: unknown, path: string): unknown {
 	return path.split('.').reduce<unknown>((o, k) => (o && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), obj);
@@ -58,6 +73,15 @@ export function rulesFromForm(form: Record<string, unknown>, base: HouseRules = 
 		let o = out;
 		for (const k of keys.slice(0, -1)) o = o[k] as Record<string, unknown>;
 		o[keys.at(-1)!] = value;
+	}
+	for (const { path } of CHOICE_FIELDS) {
+		const raw = form[path];
+		if (raw === undefined) continue;
+		const keys = path.split('.');
+		let o = out;
+		for (const k of keys.slice(0, -1)) o = o[k] as Record<string, unknown>;
+		// Any other word is refused by resolveRules with the allowed ones named.
+		o[keys.at(-1)!] = String(raw);
 	}
 	// Checked by resolveRules before any use: a value out of range is refused there, field by field.
 	return out as unknown as HouseRules;

@@ -13,6 +13,7 @@ import { inUnits } from '$lib/forms/units';
 import { OPEN_WORK_STAGES } from '$lib/orders/stages';
 import { priceLine, promisedShipDate, shippingCost, type LinePricing } from '$lib/pricing';
 import { currentRules, shopSettingsOf, type ShopSettings } from '../house/rules';
+import { clothOf } from '../order/cloth';
 import { SOURCE_NOTE_SHOPPER, type FigureSource } from '$lib/drafting/figures-source';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in'; figuresSource?: FigureSource };
@@ -67,7 +68,7 @@ function quoteLine(ctx: QuoteContext, input: QuoteInput, style: StyleRow | undef
 		const confirm = confirmAsk(err.fields, { waist: typed(m.waist), hip: typed(m.hip) }, m, input.units) ?? undefined;
 		return failure(400, err.fields.map((f) => inUnits(f.message, input.units)).join(' '), { fields, confirm });
 	}
-	const estimate = fabric ? estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct }) : null;
+	const estimate = fabric ? estimateFabric(draft, clothOf(fabric)) : null;
 	const pricing = estimate && fabric ? priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: input.options, optionPrices: style.optionPrices }) : null;
 	const shipBy = promisedShipDate(ctx.now, style.leadDays, ctx.waiting, ctx.settings.ordersPerDay);
 	return { ok: true, draft, style, fabric: fabric ?? null, fabricCm: estimate?.length ?? null, pricing, shipBy };

@@ -87,7 +87,9 @@ export const DEMO_FABRICS = [
 		stockCm: 800,
 		nap: false,
 		stretch: false,
-		shrinkagePct: 6
+		shrinkagePct: 6,
+		// Linen shrinks more along the warp than across (invented figures for the demo cloth).
+		shrinkageAcrossPct: 3
 	},
 	{
 		slug: 'rust-needlecord',

@@ -10,6 +10,7 @@ import { STAGE_LABELS } from '../../orders/stages';
 import { DEMO_SIGN_INS } from './demo-accounts.js';
 import { DEMO_FABRICS, DEMO_OPTION_PRICES, DEMO_STYLES } from './catalogue';
 import { DEMO_ORDERS, pathTo } from './orders';
+import { clothOf } from '../order/cloth';
 
 const DAY = 86_400_000;
 
@@ -63,7 +64,7 @@ export async function seedDemo(db: Db, now = new Date()) {
 		const { waistToHip, ...girths } = o.measurements;
 		const choice = { style: style.kind as StyleId, ...o.options, stretch: fabric.stretch };
 		const draft = draftSkirt(waistToHip === null ? girths : { ...girths, waistToHip }, choice, DEFAULT_RULES);
-		const estimate = estimateFabric(draft, { width: fabric.widthCm, nap: fabric.nap, shrinkage: fabric.shrinkagePct });
+		const estimate = estimateFabric(draft, clothOf(fabric));
 		const pricing = priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: o.options, optionPrices: style.optionPrices });
 		const shipping = shippingCost(pricing.total, DEFAULT_SETTINGS.shipping);
 		const placed = new Date(now.getTime() - o.placedDaysAgo * DAY);

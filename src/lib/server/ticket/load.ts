@@ -40,6 +40,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					options: orderLines.options,
 					figures: orderLines.figures,
 					fabricCm: orderLines.fabricCm,
+					cutterLay: orderLines.cutterLay,
 					styleName: styles.name,
 					fabric: {
 						name: fabrics.name,
@@ -48,7 +49,8 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 						widthCm: fabrics.widthCm,
 						nap: fabrics.nap,
 						stretch: fabrics.stretch,
-						shrinkagePct: fabrics.shrinkagePct
+						shrinkagePct: fabrics.shrinkagePct,
+						shrinkageAcrossPct: fabrics.shrinkageAcrossPct
 					}
 				})
 				.from(orderLines)
@@ -84,7 +86,8 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 					adjustments: l.adjustments,
 					options: l.options,
 					figures: l.figures,
-					fabricCm: l.fabricCm
+					fabricCm: l.fabricCm,
+					cutterLay: l.cutterLay
 				},
 				fabric: l.fabric
 			})

@@ -66,6 +66,7 @@ export function fabric(doc: Doc, t: Ticket, f: Frame, top: number, bottom: numbe
 		: `Open, one layer, ${formatCm(e.layout.laneWidth)} wide.`;
 	y += para(doc, lay, x, y, wl, { size: 7.5 }) + 3;
 	const notes = [...e.layout.notes];
+	if (t.cutterLay) notes.unshift("The cutter's lay: a longer search than the shop's quote, made after payment.");
 	const folds = t.draft.pieces.filter((p) => p.fabric === 'shell' && p.cut.onFold);
 	if (!e.layout.folded && folds.length && !notes.some((n) => n.includes('two halves')))
 		notes.push(
@@ -76,7 +77,11 @@ export function fabric(doc: Doc, t: Ticket, f: Frame, top: number, bottom: numbe
 		notes.push(`Lining pieces (${nums.join(', ')}) are cut from lining fabric, not from this length.`);
 	}
 	if (t.orderedCm !== null && Math.abs(t.orderedCm - e.length) > 0.05)
-		notes.push(`Priced with the order: ${formatMetres(t.orderedCm)} (the bolt or the rules have changed since).`);
+		notes.push(
+			t.cutterLay && e.length < t.orderedCm
+				? `Priced with the order: ${formatMetres(t.orderedCm)}; the cutter's lay needs less.`
+				: `Priced with the order: ${formatMetres(t.orderedCm)} (the bolt or the rules have changed since).`
+		);
 	// Notes that do not fit under the figures go to the top of the right-hand column, above the lay.
 	const box = markerBox(f, top, bottom);
 	const over: string[] = [];

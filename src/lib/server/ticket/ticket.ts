@@ -16,6 +16,8 @@ import {
 } from '../../drafting';
 import { draftInputOf, isErased, type StoredChoice, type StoredLine, type StoredMeasurements } from '../order/lines';
 import type { OrderStage } from '../../orders/stages';
+import type { StoredCutterLay } from '../db/schema';
+import { clothOf, cutterLayFits } from '../order/cloth';
 
 /** The cloth as the workroom has it on the shelf. */
 export interface TicketFabric {
@@ -26,6 +28,8 @@ export interface TicketFabric {
 	nap: boolean;
 	stretch: boolean;
 	shrinkagePct: number;
+	/** Shrinkage across when it differs from along; null or absent: the one value applies to both. */
+	shrinkageAcrossPct?: number | null;
 }
 
 /** The measurements as the shopper gave them (cm); a missing depth stays null. */
@@ -50,6 +54,8 @@ export interface Ticket {
 	/** The shell fabric to cut, or why it could not be laid (a fabric narrower than a piece). */
 	estimate: FabricEstimate | null;
 	estimateProblem: string | null;
+	/** The lay drawn is the cutter's (a longer search, stored with the order), not the quote's. */
+	cutterLay: boolean;
 	/** Fabric length priced with the order (cm), for comparison with today's estimate. */
 	orderedCm: number | null;
 	/** The re-drafted figures agree with those stored at order time (null when none were stored). */
@@ -76,6 +82,8 @@ export interface TicketInput {
 		adjustments?: FitAdjustments | null;
 		figures?: StoredLine['figures'] | null;
 		fabricCm?: number | null;
+		/** The cutter's lay stored with the line (drawn instead of a fresh quote lay when it fits the cloth). */
+		cutterLay?: StoredCutterLay | null;
 	};
 	fabric: TicketFabric;
 }
@@ -119,15 +127,16 @@ export function makeTicket(input: TicketInput): Ticket {
 	const given: GivenMeasurements = input.line.measurements;
 	let estimate: FabricEstimate | null = null;
 	let estimateProblem: string | null = null;
-	try {
-		estimate = estimateFabric(draft, {
-			width: input.fabric.widthCm,
-			nap: input.fabric.nap,
-			shrinkage: input.fabric.shrinkagePct
-		});
-	} catch (e) {
-		estimateProblem = e instanceof Error ? e.message : String(e);
-	}
+	const stored = input.line.cutterLay;
+	const facts = { ...input.fabric, shrinkageAcrossPct: input.fabric.shrinkageAcrossPct ?? null };
+	const useStored = cutterLayFits(stored, facts);
+	if (useStored && stored) estimate = { length: stored.length, need: stored.need, layout: stored.layout };
+	else
+		try {
+			estimate = estimateFabric(draft, clothOf(facts));
+		} catch (e) {
+			estimateProblem = e instanceof Error ? e.message : String(e);
+		}
 	return {
 		orderId: input.orderId,
 		number: input.number,
@@ -143,6 +152,7 @@ export function makeTicket(input: TicketInput): Ticket {
 		fabric: input.fabric,
 		estimate,
 		estimateProblem,
+		cutterLay: useStored,
 		orderedCm: input.line.fabricCm ?? null,
 		figuresAgree:
 			input.line.figures === undefined || input.line.figures === null

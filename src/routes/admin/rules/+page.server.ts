@@ -1,7 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
-import { RULE_FIELDS, getPath, ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
+import { CHOICE_FIELDS, RULE_FIELDS, getPath, ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
 import { houseRules, users } from '$lib/server/db/schema';
 import { currentRules } from '$lib/server/house/rules';
@@ -21,6 +21,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		version: id,
 		fields: RULE_FIELDS.map((f) => ({ path: f.path, label: f.label, help: f.help, unit: 'unit' in f ? f.unit : 'cm', step: 'step' in f ? f.step : 0.1, value: getPath(rules, f.path) as number })),
+		choices: CHOICE_FIELDS.map((f) => ({ ...f, value: getPath(rules, f.path) as string })),
 		drawing: sampleDrawing('straight', rules, id, 'block'),
 		versions
 	};
