@@ -6,16 +6,19 @@ import type { Tx } from '../order/stage';
 import { measureCardChanges, measurementProfiles, orders, fitReports } from '../db/schema';
 import type { FitAdjustments } from '../../drafting/fit';
 import { CORRECTABLE, type CorrectableField } from '../../fit/report';
+import type { StoredMeasurements } from '../order/lines';
 
 type Reader = Pick<Db, 'select'>;
-export type Figures = { measurements: Record<string, number | null>; adjustments: FitAdjustments | null };
+export type Figures = { measurements: StoredMeasurements; adjustments: FitAdjustments | null };
 
-const MEASUREMENT_FIELDS = new Set(['waist', 'hip', 'length', 'waistToHip']);
+type MeasureField = 'waist' | 'hip' | 'length' | 'waistToHip';
+const MEASUREMENT_FIELDS = new Set<string>(['waist', 'hip', 'length', 'waistToHip']);
+const isMeasure = (field: string): field is MeasureField => MEASUREMENT_FIELDS.has(field);
 const round1 = (n: number) => Math.round(n * 10) / 10;
 
 /** A figure by its correction field name: a measurement, or an adjustment ("ease.waist"). */
 export function figureOf(f: Figures, field: string): number | null {
-	if (MEASUREMENT_FIELDS.has(field)) return f.measurements[field] ?? null;
+	if (isMeasure(field)) return f.measurements[field] ?? null;
 	const a = (f.adjustments ?? {}) as Record<string, unknown>;
 	if (field.startsWith('ease.')) return ((a.ease as Record<string, number> | undefined)?.[field.slice(5)] ?? null) as number | null;
 	return (a[field] as number | undefined) ?? null;
@@ -23,7 +26,7 @@ export function figureOf(f: Figures, field: string): number | null {
 
 /** The figures with one field set (a copy). */
 export function withFigure(f: Figures, field: string, value: number): Figures {
-	if (MEASUREMENT_FIELDS.has(field)) return { ...f, measurements: { ...f.measurements, [field]: value } };
+	if (isMeasure(field)) return { ...f, measurements: { ...f.measurements, [field]: value } };
 	const a = structuredClone(f.adjustments ?? {}) as Record<string, unknown>;
 	if (field.startsWith('ease.')) a.ease = { ...((a.ease as object) ?? {}), [field.slice(5)]: value };
 	else a[field] = value;
@@ -60,7 +63,7 @@ export async function cardFor(db: Reader, userId: string | null, m: { waist?: nu
 /** Writes the corrections on her card (row locked) and one history row each. */
 export async function correctCard(
 	tx: Tx,
-	input: { userId: string | null; lineMeasurements: Record<string, number | null>; changes: Partial<Record<CorrectableField, number>>; reason: string; reportId: number; orderId: number; by: string | null }
+	input: { userId: string | null; lineMeasurements: StoredMeasurements; changes: Partial<Record<CorrectableField, number>>; reason: string; reportId: number; orderId: number; by: string | null }
 ) {
 	const card = await cardFor(tx, input.userId, input.lineMeasurements);
 	if (card) await tx.select({ id: measurementProfiles.id }).from(measurementProfiles).where(eq(measurementProfiles.id, card.id)).for('update');
@@ -71,7 +74,7 @@ export async function correctCard(
 	if (card && list.length) {
 		await tx
 			.update(measurementProfiles)
-			.set({ waist: figures.measurements.waist!, hip: figures.measurements.hip!, length: figures.measurements.length!, waistToHip: figures.measurements.waistToHip ?? null, adjustments: figures.adjustments })
+			.set({ waist: figures.measurements.waist, hip: figures.measurements.hip, length: figures.measurements.length, waistToHip: figures.measurements.waistToHip ?? null, adjustments: figures.adjustments })
 			.where(eq(measurementProfiles.id, card.id));
 	}
 	for (const c of list) {

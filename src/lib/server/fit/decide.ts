@@ -11,10 +11,10 @@ import { quoteSkirt } from '../quote/quote';
 import { shopSettingsOf } from '../house/rules';
 import { formatDate } from '../../format';
 import { formatCm } from '../../drafting/units';
-import type { MeasurementsCm, ShopOptions } from '../../forms/quote';
+import type { ShopOptions } from '../../forms/quote';
 import { changeWords, type CorrectableField } from '../../fit/report';
 import { applyChanges, correctCard, type Figures } from './card';
-import { isErased, type StoredMeasurements } from '../order/lines';
+import { draftInputOf, isErased } from '../order/lines';
 import { fitLink } from './links';
 
 export type Decision = {
@@ -68,7 +68,7 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 	if (isErased(line.measurements)) return { ok: false, status: 409, message: 'Her measurements for this order were erased at her request: ask her for them again before altering or remaking.' };
 	const changes = d.decision === 'decline' ? {} : d.changes;
 	// What changes against the first cut: the line's own figures, moved by the workroom's corrections.
-	const first: Figures = { measurements: { ...line.measurements } as unknown as Figures['measurements'], adjustments: line.adjustments ?? null };
+	const first: Figures = { measurements: { ...line.measurements }, adjustments: line.adjustments ?? null };
 	const { figures, list } = applyChanges(first, changes);
 	const corrections: FitCorrection[] = list.map((c) => ({ field: c.field, from: c.from, to: c.to }));
 	const words = corrections.map((c) => changeWords(c, formatCm));
@@ -106,10 +106,12 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 		}
 
 		// Remake: drafted now with the corrected figures, from the house rules of today.
+		const corrected = draftInputOf({ measurements: figures.measurements, options: line.options, adjustments: figures.adjustments });
+		if (!corrected) return { ok: false, status: 409, message: 'Her measurements for this order were erased at her request: ask her for them again before remaking.' };
 		const { style: _s, stretch: _st, ...options } = line.options as Record<string, unknown>;
 		const q = await quoteSkirt(
 			db,
-			{ measurements: { ...figures.measurements, ...(figures.adjustments ? { adjustments: figures.adjustments } : {}) } as unknown as MeasurementsCm, style: head.styleSlug, options: options as ShopOptions, fabricId: line.fabricId, units: 'cm' },
+			{ measurements: corrected.measurements, style: head.styleSlug, options: options as ShopOptions, fabricId: line.fabricId, units: 'cm' },
 			{ now: d.now }
 		);
 		if (!q.ok) return { ok: false, status: q.status === 404 ? 409 : 400, message: `The remake cannot be drafted with these corrections: ${q.message}` };
@@ -149,7 +151,7 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 				styleId: line.styleId,
 				fabricId: line.fabricId,
 				options: line.options,
-				measurements: figures.measurements as unknown as StoredMeasurements,
+				measurements: figures.measurements,
 				adjustments: figures.adjustments,
 				figuresSource: line.figuresSource,
 				figures: q.line.draft.figures,

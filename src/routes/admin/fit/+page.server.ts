@@ -50,7 +50,7 @@ export const actions: Actions = {
 		if (!s) return fail(404, { message: 'That suggestion no longer stands (the reports changed). Nothing was saved.' });
 		const { rules } = await currentRules(db);
 		const note = `From the fit page: ${s.words}`.slice(0, 255);
-		const [{ id }] = await db.insert(houseRules).values({ rules: applied(rules, s) as unknown as Record<string, unknown>, note, createdBy: user.id }).$returningId();
+		const [{ id }] = await db.insert(houseRules).values({ rules: applied(rules, s), note, createdBy: user.id }).$returningId();
 		return { message: `Saved as house rules version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };
