@@ -7,7 +7,7 @@ describe('money in the shop’s currency', () => {
 	it('writes each currency with its own sign and decimals (ISO 4217)', () => {
 		expect(formatMoney(1250, 'EUR')).toBe('€12.50');
 		expect(formatMoney(1250, 'GBP')).toBe('£12.50');
-		expect(formatMoney(1250, 'JPY')).toBe('¥1,250');
+		expect(formatMoney(1250, 'JPY')).toBe('JP¥1,250');
 		expect(minorDigits('JPY')).toBe(0);
 		expect(minorDigits('EUR')).toBe(2);
 	});

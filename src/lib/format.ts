@@ -18,7 +18,7 @@ export function minorDigits(currency: string): number {
 	return moneyFormat(currency).resolvedOptions().maximumFractionDigits ?? 2;
 }
 
-/** An amount in minor units, written for a person: "€12.50", "US$12.50", "¥1,250". */
+/** An amount in minor units, written for a person: "€12.50", "US$12.50", "JP¥1,250". */
 export function formatMoney(minor: number, currency: string, locale = LOCALE) {
 	return moneyFormat(currency, locale).format(minor / 10 ** minorDigits(currency));
 }

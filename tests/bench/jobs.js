@@ -75,7 +75,7 @@ export async function measureBatch(o) {
 	for (let i = 0; i < 2400; i++) {
 		await new Promise((r) => setTimeout(r, 100));
 		peakRssKb = Math.max(peakRssKb, memoryOf(o.appPid).rssKb);
-		const poll = await fetch(`${o.appUrl}/api/workroom/jobs/${id}`, { headers: { cookie } });
+		const poll = await fetch(`${o.appUrl}/workroom/jobs/${id}/progress`, { headers: { cookie } });
 		job = (await poll.json()).job;
 		if (job.status === 'done' || job.status === 'failed') break;
 	}

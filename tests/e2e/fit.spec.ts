@@ -48,7 +48,7 @@ test('a tight waist comes back as a remake drafted 2 cm larger, and her card lea
 	await waist.getByLabel('A little tight').check();
 	await waist.getByLabel(/By how much/).fill('2');
 	await page.getByTestId('zones-back').locator('[data-zone="back-waist"]').click();
-	await expect(page.getByLabel('Back waist')).toBeChecked();
+	await expect(page.getByLabel('Back waist', { exact: true })).toBeChecked();
 	const photo = await sharp({ create: { width: 600, height: 800, channels: 3, background: '#7b6a5c' } }).jpeg().toBuffer();
 	await page.locator('input[name="photo"]').setInputFiles({ name: 'back.jpg', mimeType: 'image/jpeg', buffer: photo });
 	await page.getByLabel(/I agree that the atelier keeps my photos/).check();

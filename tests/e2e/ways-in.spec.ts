@@ -91,7 +91,7 @@ test('a skirt that fits, laid flat: the widths become her figures, and the ticke
 	await page.getByRole('tab', { name: 'My usual size' }).focus();
 	await page.keyboard.press('ArrowRight');
 	await expect(page.getByRole('tab', { name: 'A skirt that fits me' })).toBeFocused();
-	await expect(page.getByRole('tabpanel')).toBeVisible();
+	await expect(page.getByRole('tabpanel').filter({ has: page.getByLabel('A: waist across') })).toBeVisible();
 	await page.getByLabel('A: waist across').fill('35.5');
 	await page.getByLabel('B: hip across').fill('48.3');
 	await page.getByLabel('Depth of B below the top edge').fill('20');

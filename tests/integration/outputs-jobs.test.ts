@@ -50,7 +50,7 @@ type Job = { status: string; done: number; total: number; failures: { orderId: n
 /** Polls the job's JSON, as the job page does, until it is done or stopped. */
 async function finished(id: number): Promise<Job> {
 	for (let i = 0; i < 200; i++) {
-		const res = await get(`/api/workroom/jobs/${id}`, cookies.cutter);
+		const res = await get(`/workroom/jobs/${id}/progress`, cookies.cutter);
 		expect(res.status).toBe(200);
 		const { job } = (await res.json()) as { job: Job };
 		expect(job.done).toBeLessThanOrEqual(job.total);
@@ -125,7 +125,7 @@ describe('files for many orders, made in the background', () => {
 
 	it('shows a job to the staff only: a shopper is refused the page, its progress and its zip', async () => {
 		const [latest] = await db.select({ id: outputJobs.id }).from(outputJobs).where(eq(outputJobs.status, 'done')).limit(1);
-		for (const path of [`/workroom/jobs/${latest.id}`, `/workroom/jobs/${latest.id}/files.zip`, `/api/workroom/jobs/${latest.id}`, '/workroom/jobs']) {
+		for (const path of [`/workroom/jobs/${latest.id}`, `/workroom/jobs/${latest.id}/files.zip`, `/workroom/jobs/${latest.id}/progress`, '/workroom/jobs']) {
 			const res = await get(path, cookies.shopper);
 			expect(res.status, path).toBe(403);
 			expect(res.headers.get('content-type') ?? '', path).not.toContain('zip');
@@ -136,7 +136,7 @@ describe('files for many orders, made in the background', () => {
 		expect(await count()).toBe(before);
 		// A job that does not exist is a plain 404 for the staff.
 		expect((await get('/workroom/jobs/99999999', cookies.cutter)).status).toBe(404);
-		expect((await get('/api/workroom/jobs/99999999', cookies.cutter)).status).toBe(404);
+		expect((await get('/workroom/jobs/99999999/progress', cookies.cutter)).status).toBe(404);
 		expect((await get('/workroom/jobs/99999999/files.zip', cookies.cutter)).status).toBe(404);
 	});
 });

@@ -101,7 +101,8 @@ export const shopperOrderAnswer = z
 				fabricCm: cm('Cloth cut for this skirt'),
 				options: z.record(z.string(), z.unknown()).meta({ description: 'The options as chosen (waistband, closure, lining, pockets, vent, hemDepth).' }),
 				lineTotal: money('This skirt'),
-				pricing: z.record(z.string(), z.number()).meta({ description: 'The line’s price in parts (fabric, making, options, total), minor units.' })
+				pricing: z.record(z.string(), z.number()).meta({ description: 'The line’s price in parts (fabric, making, options, total), minor units.' }),
+				figuresSource: z.enum(['measured', 'size_chart', 'flat_garment']).meta({ description: 'Where the figures came from: her own tape, a published size chart, or a skirt laid flat.' })
 			})
 		),
 		timeline: z.array(z.strictObject({ at: isoInstant, to: stage.nullable(), kind: z.string().meta({ description: '`stage` or `refund`.' }), note: z.string().nullable() }))
@@ -118,6 +119,7 @@ export const queueAnswer = z
 				promisedDate: isoDate,
 				daysLeft: z.number().int().meta({ description: 'Days until the promised date; negative when overdue.' }),
 				firstName: z.string(),
+				remake: z.boolean().meta({ description: 'A remake of an earlier order (no payment), made after her fit report.' }),
 				lines: z.array(z.strictObject({ style: z.string(), fabricId: z.number().int(), fabric: z.string(), colour: z.string(), fabricCm: z.number() }))
 			})
 		),

@@ -106,7 +106,7 @@ export const ORDER_STATUS_EXAMPLES: Record<string, Example> = {
 			carrier: null,
 			trackingNumber: null,
 			shippingAddress: { name: 'Priya Raman', line1: 'Rue des Tanneurs 8', city: 'Lyon', postcode: '69002', country: 'FR' },
-			lines: [{ id: 1, style: 'Rue straight skirt', styleKind: 'straight', fabric: 'Harbour wool twill', colour: 'Navy', fabricCm: 80, options: { waistband: 'band', closure: { kind: 'zip', position: 'centre-back' }, lining: true, pockets: false, vent: 'auto' }, lineTotal: 14_640, pricing: { fabric: 3040, making: 8900, options: 1800, total: 13_740 } }],
+			lines: [{ id: 1, style: 'Rue straight skirt', styleKind: 'straight', fabric: 'Harbour wool twill', colour: 'Navy', fabricCm: 80, options: { waistband: 'band', closure: { kind: 'zip', position: 'centre-back' }, lining: true, pockets: false, vent: 'auto' }, lineTotal: 14_640, pricing: { fabric: 3040, making: 8900, options: 1800, total: 13_740 } , figuresSource: 'measured' }],
 			timeline: [
 				{ at: '2026-11-27T09:12:00.000Z', to: 'awaiting_payment', kind: 'stage', note: null },
 				{ at: '2026-11-27T09:14:31.000Z', to: 'paid', kind: 'stage', note: null },
@@ -124,7 +124,7 @@ export const QUEUE_EXAMPLES: Record<string, Example> = {
 		summary: 'The queue as a cutter sees it',
 		status: 200,
 		answer: {
-			queue: [{ id: 7, number: 'QL-1007', status: 'paid', promisedDate: '2026-12-04', daysLeft: 2, firstName: 'Mirela', lines: [{ style: 'Rue straight skirt', fabricId: 1, fabric: 'Harbour wool twill', colour: 'Navy', fabricCm: 80 }] }],
+			queue: [{ id: 7, number: 'QL-1007', status: 'paid', promisedDate: '2026-12-04', daysLeft: 2, firstName: 'Mirela', remake: false, lines: [{ style: 'Rue straight skirt', fabricId: 1, fabric: 'Harbour wool twill', colour: 'Navy', fabricCm: 80 }] }],
 			at: '2026-12-02T07:30:00.000Z'
 		} satisfies QueueAnswer
 	},

@@ -30,22 +30,25 @@ describe('what a swatch upload takes', () => {
 		const text = Buffer.from('just some words in a file');
 		expect(await prepareSwatch(new Uint8Array(gif))).toEqual({
 			ok: false,
+			status: 400,
 			message: expect.stringContaining('This file is a GIF inside')
 		});
 		expect(await prepareSwatch(new Uint8Array(svg))).toEqual({
 			ok: false,
+			status: 400,
 			message: expect.stringContaining('an SVG drawing')
 		});
 		expect(await prepareSwatch(new Uint8Array(text))).toEqual({
 			ok: false,
+			status: 400,
 			message: expect.stringContaining('not a picture we can read')
 		});
 	});
 
 	it('refuses more than 5 MB and an empty file', async () => {
 		const big = await prepareSwatch(new Uint8Array(SWATCH_LIMITS.bytes + 1));
-		expect(big).toEqual({ ok: false, message: expect.stringContaining('the limit is 5 MB') });
-		expect(await prepareSwatch(new Uint8Array(0))).toEqual({ ok: false, message: expect.stringContaining('empty') });
+		expect(big).toEqual({ ok: false, status: 413, message: expect.stringContaining('the limit is 5 MB') });
+		expect(await prepareSwatch(new Uint8Array(0))).toEqual({ ok: false, status: 400, message: expect.stringContaining('empty') });
 	});
 
 	it('refuses a PNG cut short', async () => {
