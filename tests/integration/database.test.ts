@@ -5,7 +5,8 @@ import { createDb } from '../../src/lib/server/db/client';
 import { seedDemo } from '../../src/lib/server/seed/demo';
 import { testEnv } from '../support/env';
 
-const TABLES = ['account', 'combined_lay', 'combined_lay_order', 'fabric', 'fit_photo', 'fit_report', 'house_rules', 'mail_outbox', 'measure_card_change', 'measurement_profile', 'order', 'order_event', 'order_line', 'output_job', 'output_preference', 'payment', 'rate_counter', 'session', 'shop_setting', 'sign_in_attempt', 'style', 'upload', 'user', 'verificationToken', 'webhook_event'];
+// In the order MariaDB lists them (its collation sorts "_" after the letters).
+const TABLES = ['account', 'combined_lay', 'combined_lay_order', 'fabric', 'fit_photo', 'fit_report', 'house_rules', 'mail_outbox', 'measurement_profile', 'measure_card_change', 'order', 'order_event', 'order_line', 'output_job', 'output_preference', 'payment', 'rate_counter', 'session', 'shop_setting', 'sign_in_attempt', 'style', 'upload', 'user', 'verificationToken', 'webhook_event'];
 
 /** A scratch database beside the test one (the app user may create `quarterline_test…` databases). */
 async function scratchDatabase(name: string) {
