@@ -12,10 +12,10 @@ async function measureInInches(page: Page) {
 	await page.getByRole('button', { name: 'Next' }).click();
 	await page.getByLabel('Waist to hip').fill('8.25');
 	await page.getByRole('button', { name: 'Next' }).click();
-	await page.getByLabel('Skirt length', { exact: true }).fill('24');
-	await page.getByRole('button', { name: 'Next' }).click();
 	// Waist to knee is optional: skipped, the house default is used and said so.
 	await page.getByRole('button', { name: /^Skip: use/ }).click();
+	await page.getByLabel('Skirt length', { exact: true }).fill('24');
+	await page.getByRole('button', { name: 'Next' }).click();
 }
 
 async function pickFabricAndCheckout(page: Page, email: string) {
