@@ -10,6 +10,7 @@
 // Deterministic: the same problem, seed and number of evaluations give the same lay; a time limit only
 // stops it sooner.
 import type { Point } from '../geometry';
+import { compact } from './compact';
 import { decode, type Prepared, type Spot } from './decode';
 import { seeded } from './random';
 import { shapeOf } from './shape';
@@ -53,6 +54,14 @@ export interface NestOptions {
 	 * then go on from its best order at the problem's own band height. */
 	coarseBand?: number;
 	coarseShare?: number;
+	/** Share of the time (0–1) given to compaction after the order search (compact.ts): shrink the strip,
+	 * separate the overlapping pieces, repeat. Runs only with `seconds` or `compactionMoves` set. */
+	compaction?: number;
+	/** Most piece moves in compaction (the deterministic bound for it). */
+	compactionMoves?: number;
+	/** The clock the time limit is read from, in ms (default: wall clock). A CPU-time clock makes runs on a
+	 * loaded machine comparable. */
+	clock?: () => number;
 }
 
 /** One placed piece: its outline is `variants[variant].points` moved by (dx, dy). */
@@ -73,6 +82,8 @@ export interface NestResult {
 	/** Area of the pieces ÷ (width × length). */
 	utilisation: number;
 	evaluations: number;
+	/** Piece moves made by compaction (0 when it did not run). */
+	moves: number;
 	/** The order and forced ways of lying that gave this lay (to start a later, longer search from). */
 	order: number[];
 	choice: number[];
@@ -103,10 +114,24 @@ interface Lay {
 
 /** Nests the items; throws NestInputError when a piece is wider than the strip in every way it may lie. */
 export function nest(problem: NestProblem, options: NestOptions = {}): NestResult {
-	const { coarseBand, coarseShare = 0.6, ...rest } = options;
+	const { coarseBand, coarseShare = 0.6, compaction = 0, compactionMoves, ...given } = options;
+	const clock = given.clock ?? now;
+	const started = clock();
+	// Compaction gets the last share of the time (or its own move budget); the order search the rest.
+	const compacting = compaction > 0 && (given.seconds !== undefined || (compactionMoves ?? 0) > 0);
+	const rest: NestOptions = {
+		...given,
+		clock,
+		seconds: given.seconds !== undefined && compacting ? given.seconds * (1 - compaction) : given.seconds
+	};
+	const finish: Finish | undefined = compacting
+		? {
+				deadline: given.seconds !== undefined ? started + given.seconds * 1000 : Infinity,
+				moves: compactionMoves
+			}
+		: undefined;
 	const fine = problem.band ?? bandFor(problem.width);
-	if (!coarseBand || coarseBand <= fine) return nestAt(problem, rest);
-	const started = now();
+	if (!coarseBand || coarseBand <= fine) return nestAt(problem, rest, finish);
 	const first = nestAt(
 		{ ...problem, band: coarseBand },
 		{
@@ -119,15 +144,23 @@ export function nest(problem: NestProblem, options: NestOptions = {}): NestResul
 		{ ...problem, band: fine },
 		{
 			...rest,
-			seconds: rest.seconds !== undefined ? Math.max(0.001, rest.seconds - (now() - started) / 1000) : undefined,
+			seconds: rest.seconds !== undefined ? Math.max(0.001, rest.seconds - (clock() - started) / 1000) : undefined,
 			evaluations: rest.evaluations !== undefined ? Math.max(1, rest.evaluations - first.evaluations) : undefined,
 			starts: [{ order: first.order, choice: first.choice }, ...(rest.starts ?? [])]
-		}
+		},
+		finish
 	);
 	return { ...second, evaluations: first.evaluations + second.evaluations };
 }
 
-function nestAt(problem: NestProblem, options: NestOptions): NestResult {
+/** When and how long compaction runs after the order search. */
+interface Finish {
+	deadline: number;
+	moves?: number;
+}
+
+function nestAt(problem: NestProblem, options: NestOptions, finish?: Finish): NestResult {
+	const clock = options.clock ?? now;
 	const { width, items } = problem;
 	const gap = problem.gap ?? 0;
 	if (!(width > 0) || !Number.isFinite(width)) throw new NestInputError('The strip width must be a positive number.');
@@ -143,9 +176,10 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	});
 	const n = items.length;
 	const totalArea = prepared.reduce((a, p) => a + p.shapes[0].area, 0);
-	if (n === 0) return { width, length: 0, placements: [], utilisation: 0, evaluations: 0, order: [], choice: [] };
+	if (n === 0)
+		return { width, length: 0, placements: [], utilisation: 0, evaluations: 0, moves: 0, order: [], choice: [] };
 
-	const deadline = options.seconds !== undefined ? now() + options.seconds * 1000 : Infinity;
+	const deadline = options.seconds !== undefined ? clock() + options.seconds * 1000 : Infinity;
 	const budget = options.evaluations ?? (options.seconds !== undefined ? Infinity : 200);
 	const random = seeded(options.seed ?? 1);
 	let evaluations = 0;
@@ -201,7 +235,7 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	let current: Lay | null = null;
 	let currentMarks: Sheet[] = [];
 	for (const { order, choice } of starts) {
-		if (best && (evaluations >= budget || now() > deadline)) break;
+		if (best && (evaluations >= budget || clock() > deadline)) break;
 		const { lay, marks } = run(order, choice, 0, null, null);
 		if (
 			lay &&
@@ -220,7 +254,7 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	const patience = Math.max(300, 30 * n);
 	let sinceBest = 0;
 	let step = 0;
-	while (evaluations < budget && now() < deadline && n > 1) {
+	while (evaluations < budget && clock() < deadline && n > 1) {
 		if (sinceBest > patience) {
 			sinceBest = 0;
 			const order = best.order.slice();
@@ -281,7 +315,23 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 		}
 	}
 
-	const placements: NestPlacement[] = best.spots.map((s) => {
+	let moves = 0;
+	if (finish) {
+		const done = compact(prepared, width, band, count, best.spots, {
+			random,
+			clock,
+			deadline: finish.deadline,
+			moves: finish.moves
+		});
+		moves = done.moves;
+		if (done.length < best.length - 1e-9) {
+			const choice = new Int8Array(n);
+			for (const s of done.spots) choice[s.item] = s.variant;
+			best = { order: done.spots.map((s) => s.item), choice, spots: done.spots, length: done.length, score: done.length };
+		}
+	}
+	const found = best;
+	const placements: NestPlacement[] = found.spots.map((s) => {
 		const shape = prepared[s.item].shapes[s.variant];
 		const dx = s.x - shape.minX;
 		const dy = s.offset * band - shape.minY;
@@ -296,11 +346,12 @@ function nestAt(problem: NestProblem, options: NestOptions): NestResult {
 	});
 	return {
 		width,
-		length: best.length,
+		length: found.length,
 		placements,
-		utilisation: best.length > 0 ? totalArea / (width * best.length) : 0,
+		utilisation: found.length > 0 ? totalArea / (width * found.length) : 0,
 		evaluations,
-		order: best.order,
-		choice: Array.from(best.choice)
+		moves,
+		order: found.order,
+		choice: Array.from(found.choice)
 	};
 }
