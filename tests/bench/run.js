@@ -10,6 +10,7 @@ import os from 'node:os';
 import { join } from 'node:path';
 import { ensureDebianPackages, ensurePackages, onShutdown, step, done, ROOT } from '../../fakes/stack/bootstrap.js';
 import { printTable, rowsFrom } from './report.js';
+import { printLays } from './lay-report.js';
 
 /** @type {null | { stop: (o?: { keep?: boolean }) => Promise<void> }} */
 let stack = null;
@@ -25,7 +26,7 @@ async function stopStack() {
 onShutdown(stopStack);
 
 /** Runs in-process measures in a child (TypeScript through tsx) and parses its JSON line. */
-function draftBench(script = 'tests/bench/draft.ts') {
+function draftBench(script = 'tests/bench/draft.ts', timeoutMs = 400_000) {
 	return new Promise((resolve, reject) => {
 		const child = spawn(process.execPath, ['node_modules/tsx/dist/cli.mjs', script], {
 			cwd: ROOT,
@@ -35,7 +36,7 @@ function draftBench(script = 'tests/bench/draft.ts') {
 		let err = '';
 		child.stdout.on('data', (c) => (out += c));
 		child.stderr.on('data', (c) => (err += c));
-		const timer = setTimeout(() => child.kill('SIGTERM'), 400_000);
+		const timer = setTimeout(() => child.kill('SIGTERM'), timeoutMs);
 		child.on('close', (code) => {
 			clearTimeout(timer);
 			const line = out.trim().split('\n').at(-1) ?? '';
@@ -89,6 +90,12 @@ async function main() {
 	// The skirts' lays before (row lays) and after (quote, cutter), and the seeded queue laid together.
 	const lays = await measure('lays: the three skirts and the seeded queue laid together (tsx)', () => draftBench('tests/bench/lays.ts'));
 	console.log(`  lays: ${JSON.stringify(lays)}`);
+	// The shared nesting instances, each through `npm run nest` for 60 s (again by CPU time when the machine
+	// took part of the core); up to six minutes.
+	const instances = await measure('lays: the shared nesting instances, 60 s each (npm run nest)', () =>
+		draftBench('tests/bench/instances.ts', 1_200_000)
+	);
+	printLays(instances, lays);
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
@@ -168,7 +175,7 @@ async function main() {
 		}
 	});
 
-	const raw = { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live, lighthouse, typing };
+	const raw = { draft, dxf, outputs, batch, quote, ticket, checkout, pages, live, lighthouse, typing, lays, instances };
 	const rows = [...rowsFrom(raw), ...lighthouseRows(lighthouse, typing)];
 	const report = {
 		startedAt: startedAt.toISOString(),
@@ -195,6 +202,7 @@ async function main() {
 	};
 	writeFileSync(join(ROOT, 'bench.json'), `${JSON.stringify(report, null, 2)}\n`);
 	printTable(rows, report);
+	printLays(instances, lays);
 	console.log(`\nbench.json written (${rows.length} rows). A benchmark, not a test: figures are never asserted.`);
 	return Object.values(raw).some((r) => r && typeof r === 'object' && 'error' in r) ? 1 : 0;
 }

@@ -42,7 +42,7 @@ export interface Compacted {
 const EPS = 1e-9;
 
 /** Summed length of the intervals of A at (xa, band ka) and B at (xb, kb) that meet, over the bands both
- * cover within the strip's `count` bands. */
+ * cover within the strip's `count` bands; stops summing once past `limit`. */
 export function pairOverlap(
 	A: Shape,
 	xa: number,
@@ -50,7 +50,8 @@ export function pairOverlap(
 	B: Shape,
 	xb: number,
 	kb: number,
-	count: number
+	count: number,
+	limit = Infinity
 ): number {
 	if (xa + A.hi <= xb + B.lo + EPS || xb + B.hi <= xa + A.lo + EPS) return 0;
 	const ra = ka + A.first;
@@ -76,6 +77,7 @@ export function pairOverlap(
 			if (ahi < bhi) i += 2;
 			else j += 2;
 		}
+		if (sum > limit) return sum;
 	}
 	return sum;
 }
@@ -157,9 +159,10 @@ export function compact(
 			if (xj + T.hi <= lo + EPS || hi <= xj + T.lo + EPS) continue;
 			const rj = K[j] + T.first;
 			if (rj >= r1 || rj + T.bands.length <= r0) continue;
-			const o = pairOverlap(S, x, k, T, xj, K[j], count);
+			const w = W[i * n + j];
+			const o = pairOverlap(S, x, k, T, xj, K[j], count, (cap - t) / w);
 			if (o > 0) {
-				t += W[i * n + j] * o;
+				t += w * o;
 				if (t >= cap) return t;
 			}
 		}
@@ -215,7 +218,7 @@ export function compact(
 			const k0 = bk;
 			if (sx >= minX) {
 				tryAt(bv, Math.max(0, x0 - sx), k0);
-				tryAt(bv, Math.min(span, x0 + sx), k0);
+				tryAt(bv, Math.max(0, Math.min(span, x0 + sx)), k0);
 			}
 			if (sk >= 1) {
 				tryAt(bv, x0, Math.max(0, k0 - sk));
@@ -237,9 +240,9 @@ export function compact(
 	// Separates the pieces on a strip of length L; true when no two overlap any more.
 	const STRIKES = 3;
 	const STALL = Math.max(20, Math.min(60, 2 * n));
-	const separate = (L: number): boolean => {
+	const separate = (L: number, fresh: boolean): boolean => {
 		refreshAll();
-		W.fill(1);
+		if (fresh) W.fill(1);
 		let total = totalOverlap();
 		if (total <= 0) return true;
 		let keptTotal = total;
@@ -298,30 +301,67 @@ export function compact(
 		return false;
 	};
 
-	// Shrink, separate, keep; the step shrinks after failures and grows back after successes.
-	let ratio = 0.01;
-	while (!out()) {
-		const target = bestLength * (1 - ratio);
-		V.set(bestV);
-		X.set(bestX);
-		K.set(bestK);
-		// Take a slice out at a random place along the strip: pieces past it slide left by its width,
-		// pieces across it are pulled in only as far as the new end requires.
-		const cut = random() * bestLength;
-		const take = bestLength - target;
-		for (let i = 0; i < n; i++) {
-			const S = shapeOf(i);
-			if (X[i] >= cut) X[i] = Math.max(0, X[i] - take);
-			X[i] = Math.max(0, Math.min(X[i], target - S.length));
+	// Shrink, separate, keep. A failed separation is tried again at the same length a few times from its
+	// least overlapping state with two large pieces swapped (to leave the local minimum it fell into);
+	// after that, from the best lay with a smaller step.
+	const areas = items.map((it) => it.shapes[0].area);
+	const large = Array.from({ length: n }, (_, i) => i)
+		.sort((a, b) => areas[b] - areas[a] || a - b)
+		.slice(0, Math.max(2, Math.ceil(n / 2)));
+	const disrupt = (L: number) => {
+		for (let guard = 0; guard < 10; guard++) {
+			const i = large[Math.floor(random() * large.length)];
+			const j = large[Math.floor(random() * large.length)];
+			if (i === j || Math.abs(areas[i] - areas[j]) < 1e-9 * areas[i]) continue;
+			const A = shapeOf(i);
+			const B = shapeOf(j);
+			const cxi = X[i] + A.length / 2;
+			const cxj = X[j] + B.length / 2;
+			const cki = K[i] + A.breadth / band / 2;
+			const ckj = K[j] + B.breadth / band / 2;
+			const place = (m: number, S: Shape, cx: number, ck: number) => {
+				X[m] = Math.max(0, Math.min(L - S.length, cx - S.length / 2));
+				K[m] = Math.max(0, Math.min(rooms[m][V[m]] - 1, Math.round(ck - S.breadth / band / 2)));
+			};
+			place(i, A, cxj, ckj);
+			place(j, B, cxi, cki);
+			return;
 		}
-		if (separate(target) && lengthOf() < bestLength - EPS) {
+	};
+	const RETRIES = 3;
+	let ratio = 0.005;
+	let target = 0;
+	let tries = RETRIES;
+	// No lay is shorter than its longest piece (lying its shortest way).
+	const floor = Math.max(...items.map((it) => Math.min(...it.shapes.map((sh) => sh.length))));
+	while (!out()) {
+		if (bestLength * (1 - 0.001) < floor) break;
+		if (tries >= RETRIES) {
+			tries = 0;
+			target = Math.max(floor, bestLength * (1 - ratio));
+			V.set(bestV);
+			X.set(bestX);
+			K.set(bestK);
+			// Take a slice out at a random place along the strip: pieces past it slide left by its width,
+			// pieces across it are pulled in only as far as the new end requires.
+			const cut = random() * bestLength;
+			const take = bestLength - target;
+			for (let i = 0; i < n; i++) {
+				const S = shapeOf(i);
+				if (X[i] >= cut) X[i] = Math.max(0, X[i] - take);
+				X[i] = Math.max(0, Math.min(X[i], target - S.length));
+			}
+		} else disrupt(target);
+		const ok = separate(target, tries === 0) && lengthOf() < bestLength - EPS;
+		if (ok) {
 			bestLength = lengthOf();
 			bestV = V.slice();
 			bestX = X.slice();
 			bestK = K.slice();
 			shortened++;
 			ratio = Math.min(0.02, ratio * 1.5);
-		} else ratio = Math.max(0.001, ratio / 2);
+			tries = RETRIES;
+		} else if (++tries >= RETRIES) ratio = Math.max(0.001, ratio / 2);
 	}
 	const spots: Spot[] = [];
 	for (let i = 0; i < n; i++) spots.push({ item: i, variant: bestV[i], x: bestX[i], offset: bestK[i] });

@@ -13,7 +13,7 @@ import {
 	type Layout
 } from '../fabric';
 import type { Piece } from '../pieces';
-import { layPieces, type PieceLay } from './lay';
+import { compactPieces, layPieces, type PieceLay } from './lay';
 import { layPiecesOf } from './quote';
 import type { LayKind, LayPiece } from './pieces';
 
@@ -86,6 +86,13 @@ function kindsFor(groups: LayPiece[][], usable: number): LayKind[] {
 	return kinds.length ? kinds : widest('seamed') <= usable ? ['seamed'] : [];
 }
 
+/** Share of each kind's time given to compaction after the order search (engine.ts, compact.ts): the
+ * order search finds a good bottom-left lay quickly for a skirt's few pieces; moving the pieces into each
+ * other's room is what shortens it further. */
+const COMPACTION = 0.5;
+/** Piece moves of compaction per lay tried, when the search is bounded by lays tried (deterministic). */
+const MOVES_PER_EVALUATION = 20;
+
 /** Searches every kind of lay for its share of the time; the shortest wins. Sliced when `opts.slice` is
  * given (yielding between slices), else each kind in one call. */
 function* search(
@@ -110,26 +117,43 @@ function* search(
 			coarseBand: 2,
 			coarseShare: 0.5
 		};
+		const ordering = total * (1 - COMPACTION);
+		const compaction = {
+			...effort,
+			compactionMoves: effort.evaluations !== undefined ? effort.evaluations * MOVES_PER_EVALUATION : undefined
+		};
 		let lay: PieceLay | null;
-		if (!sliced) lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: total });
-		else {
+		if (!sliced) {
+			lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: ordering });
+			if (lay) lay = compactPieces(groups, kind, nap, { ...compaction, seconds: total * COMPACTION }, lay);
+		} else {
 			const slice = Math.max(0.02, opts.slice ?? 0.1);
 			const started = Date.now();
-			lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: Math.min(slice, total), evaluations: undefined });
+			const left = () => total - (Date.now() - started) / 1000;
+			lay = layPieces(groups, kind, lane, nap, { ...effort, seconds: Math.min(slice, ordering), evaluations: undefined });
 			let k = 1;
-			while (lay && (Date.now() - started) / 1000 < total - 1e-3) {
+			while (lay && left() > total * COMPACTION + 1e-3) {
 				yield;
-				const left = total - (Date.now() - started) / 1000;
-				if (left <= 0) break;
 				const next = layPieces(groups, kind, lane, nap, {
 					band: CUTTER_BAND,
 					gap,
 					seed: (opts.seed ?? 1) + k++,
-					seconds: Math.min(slice, left),
+					seconds: Math.min(slice, left() - total * COMPACTION),
 					starts: [{ order: lay.order, choice: lay.choice }]
 				});
 				if (next && next.length <= lay.length + 1e-9) lay = { ...next, evaluations: lay.evaluations + next.evaluations };
 				else lay = { ...lay, evaluations: lay.evaluations + (next?.evaluations ?? 0) };
+			}
+			// Compaction in slices, each going on from the shortest lay so far.
+			while (lay && left() > 1e-3) {
+				yield;
+				lay = compactPieces(
+					groups,
+					kind,
+					nap,
+					{ ...compaction, evaluations: undefined, compactionMoves: undefined, seed: (opts.seed ?? 1) + k++, seconds: Math.min(slice, left()) },
+					lay
+				);
 			}
 			yield;
 		}

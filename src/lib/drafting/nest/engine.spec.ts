@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { layFaults } from './check-lay';
-import { nest, NestInputError, type NestProblem } from './engine';
+import { compactLay, nest, NestInputError, type NestProblem } from './engine';
 import { itemArea, placementsJson, problemOf, readInstance, rotated } from './instance';
 
 // A small instance in the shared strip-packing form: an L, a notched block, a triangle and a slim bar.
@@ -191,6 +191,58 @@ describe('nesting engine', () => {
 						0.01
 					)
 				).toEqual([]);
+			}),
+			{ numRuns: 40 }
+		);
+	});
+
+	it('compaction shortens the lay, overlaps nothing, keeps the ways allowed, and repeats for a seed and move count', () => {
+		const plain = nest(problem, { evaluations: 30, seed: 5 });
+		const compacted = nest(problem, { evaluations: 30, seed: 5, compaction: 0.5, compactionMoves: 4000 });
+		expect(compacted.moves).toBeGreaterThan(0);
+		expect(compacted.length).toBeLessThan(plain.length);
+		expect(layFaults(compacted.placements.map((p) => p.points), problem.width, compacted.length, 0.01)).toEqual([]);
+		const json = placementsJson(inst, compacted);
+		for (const p of json.placements) expect(inst.items.find((it) => it.id === p.item)!.rotations).toContain(p.rotation);
+		expect(json.placements).toHaveLength(10);
+		const again = nest(problem, { evaluations: 30, seed: 5, compaction: 0.5, compactionMoves: 4000 });
+		expect(again.placements.map((p) => [p.key, p.variant, p.dx, p.dy])).toEqual(
+			compacted.placements.map((p) => [p.key, p.variant, p.dx, p.dy])
+		);
+		// Going on from a lay (the sliced searches): never longer, still sound.
+		const more = compactLay(problem, plain, { moves: 2000, seed: 9 });
+		expect(more.length).toBeLessThanOrEqual(plain.length);
+		expect(layFaults(more.placements.map((p) => p.points), problem.width, more.length, 0.01)).toEqual([]);
+	});
+
+	it('compaction keeps the gap and a fold piece on the fold (property, random polygons)', () => {
+		const poly = fc
+			.array(fc.tuple(fc.integer({ min: 1, max: 12 }), fc.integer({ min: 1, max: 8 })), { minLength: 3, maxLength: 7 })
+			.map((pts) => {
+				const cx = pts.reduce((a, p) => a + p[0], 0) / pts.length;
+				const cy = pts.reduce((a, p) => a + p[1], 0) / pts.length;
+				return [...pts]
+					.sort((a, b) => Math.atan2(a[1] - cy, a[0] - cx) - Math.atan2(b[1] - cy, b[0] - cx))
+					.map(([x, y]) => ({ x, y }));
+			});
+		fc.assert(
+			fc.property(fc.array(poly, { minLength: 2, maxLength: 7 }), fc.integer({ min: 1, max: 1000 }), (polys, seed) => {
+				const items = polys
+					.filter(
+						(p) =>
+							Math.abs(p.reduce((a, q, i) => a + q.x * p[(i + 1) % p.length].y - p[(i + 1) % p.length].x * q.y, 0)) > 1
+					)
+					.map((p, i) => ({
+						key: String(i),
+						atFold: i === 0,
+						variants: [0, 180].map((d) => ({ name: String(d), points: rotated(p, d) }))
+					}));
+				if (items.length < 2) return;
+				const r = nest({ width: 14, items, gap: 0.5 }, { evaluations: 6, seed, compaction: 0.5, compactionMoves: 600 });
+				expect(r.placements).toHaveLength(items.length);
+				expect(layFaults(r.placements.map((p) => p.points), 14, r.length, 0.01, 1e4, 0.5)).toEqual([]);
+				const fold = r.placements.find((p) => p.key === '0')!;
+				expect(Math.min(...fold.points.map((q) => q.y))).toBeCloseTo(0, 9);
 			}),
 			{ numRuns: 40 }
 		);

@@ -331,7 +331,66 @@ function nestAt(problem: NestProblem, options: NestOptions, finish?: Finish): Ne
 		}
 	}
 	const found = best;
-	const placements: NestPlacement[] = found.spots.map((s) => {
+	const placements = placementsOf(found.spots, prepared, items, band);
+	return {
+		width,
+		length: found.length,
+		placements,
+		utilisation: found.length > 0 ? totalArea / (width * found.length) : 0,
+		evaluations,
+		moves,
+		order: found.order,
+		choice: Array.from(found.choice)
+	};
+}
+
+/** Goes on compacting a lay `nest` gave for this problem (at the same band height), for a slice of time or
+ * a number of moves: what a search that must pause between slices calls after its order search. Returns
+ * the lay itself when nothing shorter was found. */
+export function compactLay(
+	problem: NestProblem,
+	from: NestResult,
+	options: { seconds?: number; moves?: number; seed?: number; clock?: () => number }
+): NestResult {
+	const clock = options.clock ?? now;
+	const { width, items } = problem;
+	const n = items.length;
+	if (n < 2 || from.placements.length !== n) return from;
+	const gap = problem.gap ?? 0;
+	const band = problem.band ?? bandFor(width);
+	const count = Math.ceil(width / band - 1e-9);
+	const prepared: Prepared[] = items.map((it) => ({
+		shapes: it.variants.map((v) => shapeOf(v.points, band, gap / 2)),
+		atFold: !!it.atFold
+	}));
+	const spots: Spot[] = from.placements.map((p) => {
+		const shape = prepared[p.index].shapes[p.variant];
+		return { item: p.index, variant: p.variant, x: p.dx + shape.minX, offset: Math.round((p.dy + shape.minY) / band) };
+	});
+	const done = compact(prepared, width, band, count, spots, {
+		random: seeded(options.seed ?? 1),
+		clock,
+		deadline: options.seconds !== undefined ? clock() + options.seconds * 1000 : Infinity,
+		moves: options.moves ?? (options.seconds === undefined ? 0 : undefined)
+	});
+	if (!(done.length < from.length - 1e-9)) return { ...from, moves: from.moves + done.moves };
+	const totalArea = prepared.reduce((a, p) => a + p.shapes[0].area, 0);
+	const choice = new Array<number>(n).fill(-1);
+	for (const s of done.spots) choice[s.item] = s.variant;
+	return {
+		width,
+		length: done.length,
+		placements: placementsOf(done.spots, prepared, items, band),
+		utilisation: totalArea / (width * done.length),
+		evaluations: from.evaluations,
+		moves: from.moves + done.moves,
+		order: done.spots.map((s) => s.item),
+		choice
+	};
+}
+
+function placementsOf(spots: Spot[], prepared: Prepared[], items: NestItem[], band: number): NestPlacement[] {
+	return spots.map((s) => {
 		const shape = prepared[s.item].shapes[s.variant];
 		const dx = s.x - shape.minX;
 		const dy = s.offset * band - shape.minY;
@@ -344,14 +403,4 @@ function nestAt(problem: NestProblem, options: NestOptions, finish?: Finish): Ne
 			points: shape.points.map((p) => ({ x: p.x + dx, y: p.y + dy }))
 		};
 	});
-	return {
-		width,
-		length: found.length,
-		placements,
-		utilisation: found.length > 0 ? totalArea / (width * found.length) : 0,
-		evaluations,
-		moves,
-		order: found.order,
-		choice: Array.from(found.choice)
-	};
 }

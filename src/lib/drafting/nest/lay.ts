@@ -1,7 +1,7 @@
 // One lay of skirt pieces (of one order or several) on one kind of lay, through the nester, and the
 // result in the drawing's coordinates (x across from the fold or a selvedge, y along the length).
 import type { Point } from '../geometry';
-import { nest, NestInputError, type NestOptions, type NestPlacement, type NestResult } from './engine';
+import { compactLay, nest, NestInputError, type NestOptions, type NestPlacement, type NestResult } from './engine';
 import { fromStrip, itemsFor, type ItemInfo, type LayKind, type LayPiece, type Orientation } from './pieces';
 
 /** One piece as laid. */
@@ -29,6 +29,8 @@ export interface PieceLay {
 	evaluations: number;
 	order: number[];
 	choice: number[];
+	/** The engine's own result, to go on compacting from (absent for the quote's ladder lays). */
+	result?: NestResult;
 }
 
 export interface LayEffort extends NestOptions {
@@ -64,7 +66,39 @@ export function layPieces(
 		utilisation: result.utilisation,
 		evaluations: result.evaluations,
 		order: result.order,
-		choice: result.choice
+		choice: result.choice,
+		result
+	};
+}
+
+/** Goes on compacting a lay made by `layPieces` with the same groups, kind, lane, nap and effort. */
+export function compactPieces(
+	groups: LayPiece[][],
+	kind: LayKind,
+	nap: boolean,
+	effort: LayEffort,
+	from: PieceLay
+): PieceLay {
+	if (!from.result) return from;
+	const all = groups.map((g, i) => itemsFor(g, kind, nap, i));
+	const items = all.flatMap((a) => a.items);
+	const info: ItemInfo[] = all.flatMap((a) => a.info);
+	const { band, gap, seconds, seed, clock, compactionMoves } = effort;
+	const result = compactLay({ width: from.lane, items, gap, band }, from.result, {
+		seconds,
+		seed,
+		clock,
+		moves: compactionMoves
+	});
+	if (result === from.result || result.length >= from.length - 1e-9) return from;
+	return {
+		...from,
+		length: result.length,
+		pieces: placedPieces(result.placements, info),
+		utilisation: result.utilisation,
+		order: result.order,
+		choice: result.choice,
+		result
 	};
 }
 

@@ -171,6 +171,17 @@ describe('nested lays for skirts', () => {
 		);
 	}, 60_000);
 
+	for (const t of targets)
+		it(`${t.name}: the cutter’s lay (order search, then compaction) is sound and no longer than the quote’s`, () => {
+			const d = draftSkirt(t.m, { style: t.style });
+			for (const nap of [false, true]) {
+				const cloth = { width: t.width, nap, shrinkage: 0 };
+				const cut = cutterLay(d, cloth, { evaluations: 40, seconds: 20 });
+				expect(cut.length).toBeLessThanOrEqual(estimateFabric(d, cloth).length);
+				checkLay(d, cut, nap);
+			}
+		}, 60_000);
+
 	it('a cutter’s lay is never longer than the quote’s, and a combined lay reports what it saves', () => {
 		const a = draftSkirt({ waist: 70, hip: 96, length: 60 }, { style: 'a-line' });
 		const b = draftSkirt({ waist: 80, hip: 104, length: 55 }, { style: 'straight' });
