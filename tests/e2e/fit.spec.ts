@@ -6,6 +6,7 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { createDb } from '../../src/lib/server/db/client';
 import { deliveredOrder } from '../support/fit';
 import { eventually, mailsTo } from '../support/shop';
+import { pdfText } from '../support/pixels';
 
 // The fit loop end to end: she says "waist too tight by 2 cm" with a photo; the owner approves a remake
 // with 2 cm more at the waist; the remake is in the queue with the changed figures on its ticket page;
@@ -81,6 +82,16 @@ test('a tight waist comes back as a remake drafted 2 cm larger, and her card lea
 	await expect(owner.getByTestId('remake-changes')).toContainText('Waist 72 cm → 74 cm');
 	await shot(owner, '6-remake-ticket');
 	const remakeNumber = (await owner.getByRole('heading', { level: 1 }).textContent())!.trim();
+	// The printed ticket the cutter works from says what changed against the first cut, old and new,
+	// why, and the report it came from (read back with poppler's pdftotext).
+	const remakeId = new URL(owner.url()).pathname.split('/').pop();
+	const ticket = await owner.request.get(`/workroom/orders/${remakeId}/ticket.pdf`);
+	expect(ticket.status()).toBe(200);
+	const text = pdfText(await ticket.body(), 1, 1).replace(/\s+/g, ' ');
+	expect(text).toContain(`Remake of order ${order.number} — changes against the first cut`);
+	expect(text).toMatch(/Waist 72 cm → 74 cm/);
+	expect(text).toContain('We cut it again with 2 cm more at the waist.');
+	expect(text).toMatch(/fit report \d+ of \d/);
 	await owner.goto('/workroom');
 	const row = owner.getByTestId('queue-row').filter({ hasText: remakeNumber });
 	await expect(row.getByTestId('remake-mark')).toHaveText('Remake');
