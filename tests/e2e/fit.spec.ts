@@ -89,9 +89,8 @@ test('a tight waist comes back as a remake drafted 2 cm larger, and her card lea
 	expect(ticket.status()).toBe(200);
 	const text = pdfText(await ticket.body(), 1, 1).replace(/\s+/g, ' ');
 	expect(text).toContain(`Remake of order ${order.number} — changes against the first cut`);
-	expect(text).toMatch(/Waist 72 cm → 74 cm/);
-	expect(text).toContain('We cut it again with 2 cm more at the waist.');
-	expect(text).toMatch(/fit report \d+ of \d/);
+	expect(text).toContain('Waist: first cut 72 cm, now 74 cm');
+	expect(text).toMatch(/From fit report \d+ of \d+ \w+ \d{4}\. Why: We cut it again with 2 cm more at the waist\./);
 	await owner.goto('/workroom');
 	const row = owner.getByTestId('queue-row').filter({ hasText: remakeNumber });
 	await expect(row.getByTestId('remake-mark')).toHaveText('Remake');

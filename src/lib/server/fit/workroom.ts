@@ -68,13 +68,3 @@ export async function fitReportForStaff(db: Db, id: number) {
 		remake: remake[0] ?? null
 	};
 }
-
-/** For a remake's ticket and workroom page: what changed against the first cut, and why. */
-export async function remakeChanges(db: Db, orderId: number) {
-	const [row] = await db
-		.select({ corrections: fitReports.corrections, reason: fitReports.reason, firstNumber: orders.number })
-		.from(fitReports)
-		.innerJoin(orders, eq(orders.id, fitReports.orderId))
-		.where(eq(fitReports.remakeOrderId, orderId));
-	return row ? { firstNumber: row.firstNumber, reason: row.reason ?? '', corrections: row.corrections ?? [] } : null;
-}
