@@ -57,6 +57,13 @@ export function fitWindow(order: Pick<OrderRow, 'status'>, delivered: Date | nul
 	return { open: true, closes };
 }
 
+/** Whether her order page offers "Tell us how it fits": its window, read from the shop's settings. */
+export async function fitOffer(db: Db, order: Pick<OrderRow, 'id' | 'status'>, now = new Date()) {
+	const [settings, delivered] = await Promise.all([shopSettingsOf(db), deliveredAt(db, order.id)]);
+	const window = fitWindow(order, delivered, settings.remakeWindowDays, now);
+	return window.open ? { closes: window.closes.toISOString() } : null;
+}
+
 /** Everything her fit page shows: the skirts of the order, each with its report if she made one. */
 export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 	const settings = await shopSettingsOf(db);
@@ -89,7 +96,7 @@ export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 			photos: (await photosOf(db, r.id)).map((p) => ({ id: p.id, width: p.width, height: p.height }))
 		}))
 	);
-	return { window: window.open ? { open: true as const, closes: window.closes.toISOString() } : window, lines, reports: withPhotos, photoRetentionDays: settings.photoRetentionDays };
+	return { window: window.open ? { open: true as const, closes: window.closes.toISOString() } : window, lines, reports: withPhotos, photoRetentionDays: settings.photoRetentionDays, freeRemakesPerOrder: settings.freeRemakesPerOrder };
 }
 
 export type ReportInput = {

@@ -34,10 +34,10 @@ export type ShopSettings = {
 	units: 'cm' | 'in';
 	shipping: ShippingRule;
 	ordersPerDay: number;
-	remakePolicy: string;
 	/** The workroom plotter's roll width (cm), the default width of a full-size pattern on a roll. */
 	plotterWidthCm: number;
-	/** Days after delivery within which she may report how it fits. */
+	/** Days after delivery within which she may report how it fits. The remake promise's words are built
+	 * from this and freeRemakesPerOrder (fit/promise.ts), so the words and the rule cannot disagree. */
 	remakeWindowDays: number;
 	/** Days her fit photos are kept before they are deleted on their own. */
 	photoRetentionDays: number;
@@ -53,7 +53,6 @@ const DEFAULTS: ShopSettings = {
 	ordersPerDay: 4,
 	// A 36 in roll, the common plotter width (91.4 cm).
 	plotterWidthCm: 91.4,
-	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.',
 	remakeWindowDays: 30,
 	photoRetentionDays: 90,
 	freeRemakesPerOrder: 1
@@ -64,10 +63,22 @@ const DEFAULTS: ShopSettings = {
 const SETTINGS_TTL_MS = 5_000;
 let cachedSettings: { at: number; value: ShopSettings } | null = null;
 
-export async function shopSettingsOf(db: Db, fresh = false): Promise<ShopSettings> {
+export async function shopSettingsOf(db: Pick<Db, 'select'>, fresh = false): Promise<ShopSettings> {
 	if (!fresh && cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
 	const rows = await db.select().from(shopSettings).where(inArray(shopSettings.key, Object.keys(DEFAULTS)));
 	const value = { ...DEFAULTS, ...Object.fromEntries(rows.map((r) => [r.key, r.value])) } as ShopSettings;
 	cachedSettings = { at: Date.now(), value };
 	return value;
+}
+
+/** Writes settings (one row each, in one transaction) and drops this server's cached copy, so the next
+ * page it serves reads them; other app servers see them within SETTINGS_TTL_MS. */
+export async function saveShopSettings(db: Db, values: Partial<ShopSettings>) {
+	await db.transaction(async (tx) => {
+		for (const [key, value] of Object.entries(values)) {
+			if (value === undefined) continue;
+			await tx.insert(shopSettings).values({ key, value }).onDuplicateKeyUpdate({ set: { value } });
+		}
+	});
+	cachedSettings = null;
 }

@@ -14,6 +14,7 @@ import { OPEN_WORK_STAGES } from '$lib/orders/stages';
 import { priceLine, promisedShipDate, shippingCost, type LinePricing } from '$lib/pricing';
 import { currentRules, shopSettingsOf, type ShopSettings } from '../house/rules';
 import { clothOf } from '../order/cloth';
+import { remakePromise } from '$lib/fit/promise';
 import { SOURCE_NOTE_SHOPPER, type FigureSource } from '$lib/drafting/figures-source';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in'; figuresSource?: FigureSource };
@@ -106,7 +107,7 @@ export async function quoteBag(db: Db, inputs: QuoteInput[], opts: { now?: Date 
 	const subtotal = lines.reduce((s, l) => s + (l.ok && l.pricing ? l.pricing.total : 0), 0);
 	const shipping = subtotal > 0 ? shippingCost(subtotal, ctx.settings.shipping) : 0;
 	const shipBy = lines.flatMap((l) => (l.ok ? [l.shipBy] : [])).sort().at(-1) ?? null;
-	return { rulesId: ctx.rulesId, currency: ctx.settings.currency, remakePolicy: ctx.settings.remakePolicy, lines, subtotal, shipping, total: subtotal + shipping, shipBy };
+	return { rulesId: ctx.rulesId, currency: ctx.settings.currency, remakePolicy: remakePromise(ctx.settings), lines, subtotal, shipping, total: subtotal + shipping, shipBy };
 }
 
 /**

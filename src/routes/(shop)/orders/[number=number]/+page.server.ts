@@ -4,6 +4,7 @@ import { env } from '$env/dynamic/private';
 import { db } from '$lib/server/db';
 import { fitReports, orders } from '$lib/server/db/schema';
 import { orderForShopper } from '$lib/server/order/view';
+import { fitOffer } from '$lib/server/fit/report';
 import { stripe } from '$lib/server/order/payments/stripe';
 import { startPayment } from '$lib/server/order/place';
 import { orderLineDrawings } from '$lib/server/outputs/garment';
@@ -15,11 +16,12 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const token = url.searchParams.get('t');
 	const order = await orderForShopper(db, params.number, locals.user, token);
 	if (!order) error(404, NOT_FOUND);
-	// "Tell us how it fits" once the skirt has arrived (the fit page says whether the window is still open).
-	const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, order.number));
+	// "Tell us how it fits" once the skirt has arrived and while the remake window (a setting) is open.
+	const [row] = await db.select({ id: orders.id, status: orders.status }).from(orders).where(eq(orders.number, order.number));
 	const [report] = await db.select({ id: fitReports.id }).from(fitReports).where(eq(fitReports.orderId, row.id)).limit(1);
-	const fit = report ? 'sent' : ['delivered', 'awaiting_return', 'altering'].includes(order.status) ? 'open' : null;
-	return { order, drawings: await orderLineDrawings(db, order.number), token, fit, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+	const offer = report ? null : await fitOffer(db, row);
+	const fit = report ? ('sent' as const) : offer ? ('open' as const) : null;
+	return { order, drawings: await orderLineDrawings(db, order.number), token, fit, fitCloses: offer?.closes ?? null, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
 };
 
 export const actions: Actions = {
