@@ -79,6 +79,8 @@ export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 		db.select().from(fitReports).where(eq(fitReports.orderId, order.id))
 	]);
 	const window = fitWindow(order, delivered, settings.remakeWindowDays, now);
+	const remakeIds = reports.map((r) => r.remakeOrderId).filter((id): id is number => id !== null);
+	const remakes = remakeIds.length ? await db.select({ id: orders.id, number: orders.number, promisedDate: orders.promisedDate }).from(orders).where(inArray(orders.id, remakeIds)) : [];
 	const withPhotos = await Promise.all(
 		reports.map(async (r) => ({
 			id: r.id,
@@ -92,6 +94,7 @@ export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 			decision: r.decision,
 			reason: r.reason,
 			corrections: r.corrections,
+			remake: remakes.find((o) => o.id === r.remakeOrderId) ?? null,
 			createdAt: r.createdAt.toISOString(),
 			photos: (await photosOf(db, r.id)).map((p) => ({ id: p.id, width: p.width, height: p.height }))
 		}))
@@ -171,7 +174,7 @@ export async function submitReport(db: Db, orderId: number, input: ReportInput, 
 			.insert(fitReports)
 			.values({ orderId: order.id, orderLineId: line.id, answers: input.answers, marks: input.marks, note: input.note, wish: input.wish, units: input.units })
 			.$returningId();
-		const mailId = await enqueueMail(tx, { to: order.email, orderId: order.id, ...reportReceivedMail({ number: order.number, shopperName: order.shopperName, link, wish: input.wish }) });
+		const mailId = await enqueueMail(tx, { to: order.email, orderId: order.id, ...reportReceivedMail({ number: order.number, shopperName: order.shopperName, link, wish: input.wish, photoRetentionDays: settings.photoRetentionDays }) });
 		return { ok: true as const, reportId: id, mailIds: [mailId] };
 	});
 	if (!result.ok) return result;

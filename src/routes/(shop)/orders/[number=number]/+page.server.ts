@@ -17,11 +17,12 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const order = await orderForShopper(db, params.number, locals.user, token);
 	if (!order) error(404, NOT_FOUND);
 	// "Tell us how it fits" once the skirt has arrived and while the remake window (a setting) is open.
-	const [row] = await db.select({ id: orders.id, status: orders.status }).from(orders).where(eq(orders.number, order.number));
+	const [row] = await db.select({ id: orders.id, status: orders.status, remakeOfId: orders.remakeOfId }).from(orders).where(eq(orders.number, order.number));
+	const [first] = row.remakeOfId ? await db.select({ number: orders.number }).from(orders).where(eq(orders.id, row.remakeOfId)) : [];
 	const [report] = await db.select({ id: fitReports.id }).from(fitReports).where(eq(fitReports.orderId, row.id)).limit(1);
 	const offer = report ? null : await fitOffer(db, row);
 	const fit = report ? ('sent' as const) : offer ? ('open' as const) : null;
-	return { order, drawings: await orderLineDrawings(db, order.number), token, fit, fitCloses: offer?.closes ?? null, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
+	return { order, drawings: await orderLineDrawings(db, order.number), token, fit, fitCloses: offer?.closes ?? null, remakeOf: first?.number ?? null, justPaid: url.searchParams.has('paid'), retry: url.searchParams.has('retry') };
 };
 
 export const actions: Actions = {
