@@ -1,4 +1,4 @@
-import { fail, message, superValidate } from 'sveltekit-superforms';
+import { fail, message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { db } from '$lib/server/db';
 import { saveShopSettings, shopSettingsOf } from '$lib/server/house/rules';
@@ -17,9 +17,13 @@ export const actions: Actions = {
 	default: async (event) => {
 		// Asked here too, from the route SvelteKit matched: a posted form reaches the action without the load.
 		requireRole(event, OWNER);
-		const form = await superValidate(event.request, zod4(fitSettingsSchema));
-		// Bad input changes nothing: every value is checked before any is written.
-		if (!form.valid) return fail(400, { form });
+		const posted = await event.request.formData();
+		const form = await superValidate(posted, zod4(fitSettingsSchema));
+		// Superforms reads a whole-number field with parseInt ("12.5" becomes 12): the typed text is checked
+		// as typed too, so a fraction is refused rather than cut. Bad input changes nothing.
+		const typed = fitSettingsSchema.safeParse(Object.fromEntries(posted));
+		if (!typed.success) for (const issue of typed.error.issues) setError(form, issue.path.join('.') as keyof typeof form.data, issue.message);
+		if (!form.valid || !typed.success) return fail(400, { form });
 		await saveShopSettings(db, form.data);
 		return message(form, 'Saved. The shop’s pages, mails and the fit report window use the new settings now.');
 	}
