@@ -2,9 +2,9 @@
 // adjustments. Read from a plain form post; checked by the engine's own rules with the card's girths.
 import type { FitAdjustments } from '../drafting/fit';
 import { validateMeasurements } from '../drafting/measurements';
+import { problemIn } from '../drafting/errors';
 import { inToCm } from '../drafting/units';
 import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing, type FitField, type FitForm } from './fit';
-import { inUnits } from './units';
 
 export type CardFitForm = FitForm & { waistToKnee: number | null };
 export type CardFitErrors = Partial<Record<FitField | 'waistToKnee', string[]>>;
@@ -44,7 +44,7 @@ export function checkCardFit(card: CardGirths, values: CardFitForm, errors: Card
 	// confirmed then is not asked again here.
 	for (const p of validateMeasurements(m)) {
 		const field = FIT_FIELD_OF[p.field] ?? (p.field === 'waistToKnee' ? 'waistToKnee' : null);
-		if (field && !p.confirmable) (out[field] ??= []).push(inUnits(p.message, units));
+		if (field && !p.confirmable) (out[field] ??= []).push(problemIn(p, units));
 	}
 	if (sideMissing(values)) (out.oneHipSide ??= []).push('Say which hip is higher or fuller: left or right.');
 	return Object.keys(out).length ? { ok: false as const, errors: out } : { ok: true as const, waistToKnee: knee, adjustments };

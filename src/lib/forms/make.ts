@@ -2,8 +2,8 @@
 // JavaScript and with superforms' client validation alike. It becomes a bag item on the server.
 import { z } from 'zod';
 import { toCm, UNITS, type BagItem } from './quote';
-import { inUnits } from './units';
 import { validateMeasurements } from '../drafting/measurements';
+import { problemIn } from '../drafting/errors';
 import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing } from './fit';
 import { FIGURE_SOURCES } from '../drafting/figures-source';
 
@@ -54,7 +54,7 @@ export const makeFormSchema = z
 		// A figure she may confirm is not an error of the form: the engine asks "did you mean …?" for it.
 		for (const p of validateMeasurements(cm)) {
 			const field = FIT_FIELD_OF[p.field] ?? p.field;
-			if (!p.confirmable && !(missing as string[]).includes(field)) ctx.addIssue({ code: 'custom', path: [field], message: inUnits(p.message, f.units) });
+			if (!p.confirmable && !(missing as string[]).includes(field)) ctx.addIssue({ code: 'custom', path: [field], message: problemIn(p, f.units) });
 		}
 		if (sideMissing(f)) ctx.addIssue({ code: 'custom', path: ['oneHipSide'], message: 'Say which hip is higher or fuller: left or right.' });
 		if (f.saveCard && !f.cardName) ctx.addIssue({ code: 'custom', path: ['cardName'], message: 'Give your measure card a name, such as "Everyday".' });

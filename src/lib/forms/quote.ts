@@ -2,9 +2,9 @@
 // the form actions and the /api/quote endpoint, so all three refuse the same things in the same words.
 import { z } from 'zod';
 import { validateMeasurements } from '../drafting/measurements';
+import { problemIn } from '../drafting/errors';
 import type { FitAdjustments } from '../drafting/fit';
 import { inToCm } from '../drafting/units';
-import { inUnits } from './units';
 import { FIGURE_SOURCES } from '../drafting/figures-source';
 
 export const UNITS = ['cm', 'in'] as const;
@@ -106,7 +106,7 @@ export type ShopOptions = z.infer<typeof optionsSchema>;
 /** Checks the measurements against the engine's own ranges, with the messages in the shopper's units. A
  * figure she may confirm is left to the engine, which answers with its value and limit ("did you mean …?"). */
 function checkRanges(m: MeasurementsCm, ctx: z.RefinementCtx, units: (typeof UNITS)[number], path: string[]) {
-	for (const p of validateMeasurements(m)) if (!p.confirmable) ctx.addIssue({ code: 'custom', message: inUnits(p.message, units), path: [...path, ...p.field.split('.')] });
+	for (const p of validateMeasurements(m)) if (!p.confirmable) ctx.addIssue({ code: 'custom', message: problemIn(p, units), path: [...path, ...p.field.split('.')] });
 }
 
 export const quoteSchema = z
