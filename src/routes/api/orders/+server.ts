@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
+import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/api/answers';
 import { env } from '$env/dynamic/private';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { QuoteAnswer } from '$lib/server/api/answers';
+import type { QuoteAnswer } from '$lib/api/answers';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';
 import { quoteSchema, requestInCm } from '$lib/forms/quote';

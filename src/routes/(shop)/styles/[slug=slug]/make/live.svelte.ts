@@ -5,7 +5,7 @@ import { optionsOfForm, skirtRequestOf, type MakeForm } from '$lib/forms/make';
 import type { Preview, PreviewInput } from '$lib/drafting/preview';
 import type { HouseRules } from '$lib/drafting/rules';
 import type { StyleId } from '$lib/drafting/options';
-import type { Quote } from '$lib/server/quote/quote';
+import type { QuoteAnswer } from '$lib/api/answers';
 import type { ConfirmAsk } from '$lib/forms/confirm';
 
 type Fabric = { id: number; name: string; colour: string; swatchHex: string; imageUrl: string | null };
@@ -60,7 +60,7 @@ export function previewInput(style: StyleId, form: MakeForm, rules: HouseRules, 
 }
 
 export class LiveQuote {
-	quote = $state<Quote | null>(null);
+	quote = $state<QuoteAnswer | null>(null);
 	problem = $state<string | null>(null);
 	/** A figure outside what a block fits: asked, never silently drafted ("did you mean …?"). */
 	confirmAsk = $state<ConfirmAsk | null>(null);
