@@ -64,6 +64,21 @@ export async function fitOffer(db: Db, order: Pick<OrderRow, 'id' | 'status'>, n
 	return window.open ? { closes: window.closes.toISOString() } : null;
 }
 
+/**
+ * What her order page says of the fit loop: a report already sent, or "Tell us how it fits" while the
+ * window is open (until `closes`), and the order this one remakes.
+ */
+export async function fitStateOfOrder(db: Db, number: string, now = new Date()) {
+	const [row] = await db.select({ id: orders.id, status: orders.status, remakeOfId: orders.remakeOfId }).from(orders).where(eq(orders.number, number));
+	if (!row) return null;
+	const [[first], [report]] = await Promise.all([
+		row.remakeOfId ? db.select({ number: orders.number }).from(orders).where(eq(orders.id, row.remakeOfId)) : Promise.resolve([]),
+		db.select({ id: fitReports.id }).from(fitReports).where(eq(fitReports.orderId, row.id)).limit(1)
+	]);
+	const offer = report ? null : await fitOffer(db, row, now);
+	return { fit: report ? ('sent' as const) : offer ? ('open' as const) : null, closes: offer?.closes ?? null, remakeOf: first?.number ?? null };
+}
+
 /** Everything her fit page shows: the skirts of the order, each with its report if she made one. */
 export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 	const settings = await shopSettingsOf(db);

@@ -1,6 +1,6 @@
-import { eq, inArray, max } from 'drizzle-orm';
+import { desc, eq, inArray, max } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { houseRules, shopSettings } from '../db/schema';
+import { houseRules, shopSettings, users } from '../db/schema';
 import { resolveRules, type HouseRules } from '$lib/drafting/rules';
 import { DEFAULT_SHIPPING, type ShippingRule } from '$lib/pricing';
 
@@ -15,6 +15,21 @@ export async function currentRules(db: Db): Promise<{ id: number; rules: HouseRu
 	if (!id) throw new Error('No house rules: run the seed (npm start does).');
 	return { id, rules: await rulesVersion(db, id) };
 }
+
+/** A new version of the rules (already checked and resolved); placed orders keep the version they name. */
+export async function saveRulesVersion(db: Db, rules: HouseRules, note: string, by: string): Promise<number> {
+	const [{ id }] = await db.insert(houseRules).values({ rules, note, createdBy: by }).$returningId();
+	return id;
+}
+
+/** The newest versions with their notes and who saved them, as the back office lists them. */
+export const rulesVersions = (db: Db, limit = 20) =>
+	db
+		.select({ id: houseRules.id, note: houseRules.note, createdAt: houseRules.createdAt, by: users.name })
+		.from(houseRules)
+		.leftJoin(users, eq(users.id, houseRules.createdBy))
+		.orderBy(desc(houseRules.id))
+		.limit(limit);
 
 /** One version of the rules, as an order that was drafted with it needs them. */
 export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {

@@ -76,3 +76,9 @@ export function ordersOfShopper(db: Db, userId: string, limit?: number) {
 		.orderBy(desc(orders.createdAt));
 	return limit ? q.limit(limit) : q;
 }
+
+/** An order's id by its number, once a view has said the viewer may see it. */
+export async function orderIdOf(db: Db, number: string): Promise<number> {
+	const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, number));
+	return row.id;
+}
