@@ -5,7 +5,7 @@ import { moveFromForm } from '$lib/server/order/move-action';
 import { orderForWorkroom } from '$lib/server/order/workroom-view';
 import { paperChoiceOf } from '$lib/server/outputs/preference';
 import { shopSettingsOf } from '$lib/server/house/rules';
-import { remakeChanges } from '$lib/server/fit/workroom';
+import { remakeChanges } from '$lib/server/fit/remake-changes';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
