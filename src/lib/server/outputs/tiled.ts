@@ -132,16 +132,19 @@ function footer(doc: Doc, src: PatternSource, w: number, h: number, page: number
 	});
 }
 
-/** Alignment circle with a cross, centred on a trim line. */
-function target(doc: Doc, x: number, y: number) {
+/** Alignment circles with a cross, centred on the trim lines: a page's all with the pen set once. */
+function targets(doc: Doc, at: [number, number][]) {
+	if (!at.length) return;
 	const r = 3 * MM;
 	doc.save().lineWidth(0.5).strokeColor(PALETTE.ink);
-	doc.circle(x, y, r).stroke();
-	doc.moveTo(x - 1.6 * r, y).lineTo(x + 1.6 * r, y).moveTo(x, y - 1.6 * r).lineTo(x, y + 1.6 * r).stroke();
+	for (const [x, y] of at) {
+		doc.circle(x, y, r).stroke();
+		doc.moveTo(x - 1.6 * r, y).lineTo(x + 1.6 * r, y).moveTo(x, y - 1.6 * r).lineTo(x, y + 1.6 * r).stroke();
+	}
 	doc.restore();
 }
 
-function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], index: number) {
+function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], printed: Map<string, number>, index: number) {
 	const c = plan.cells[index];
 	const [pw, ph] = pageName(paper, landscape);
 	doc.addPage({ size: [pw, ph], margin: 0 });
@@ -170,10 +173,10 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	// The trim line round the cell: drawn over the pieces so it is whole (the scale test finds it).
 	doc.save().rect(left, top, cw, ch).lineWidth(1).strokeColor(PALETTE.pencil).stroke().restore();
 	// Circles on every edge shared with another printed page, and that page's name beside them.
-	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
 	const near = (dr: number, dc: number) => printed.get(`${c.row + dr}:${c.col + dc}`);
 	const note = (s: string, x: number, y: number, align: 'left' | 'center' | 'right') =>
 		line(doc, s, x, y, { size: 6.5, align, color: PALETTE.pencil });
+	const circles: [number, number][] = [];
 	for (const [dr, dc] of [
 		[0, -1],
 		[0, 1],
@@ -185,14 +188,15 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 		const other = `${cellName(plan.cells[j])} (p. ${j + 2})`;
 		if (dc !== 0) {
 			const x = dc < 0 ? left : left + cw;
-			for (const f of [0.25, 0.75]) target(doc, x, top + ch * f);
+			for (const f of [0.25, 0.75]) circles.push([x, top + ch * f]);
 			note(`joins ${other}`, dc < 0 ? x + 12 : x - 12, top + ch * 0.5, dc < 0 ? 'left' : 'right');
 		} else {
 			const y = dr < 0 ? top : top + ch;
-			for (const f of [0.25, 0.75]) target(doc, left + cw * f, y);
+			for (const f of [0.25, 0.75]) circles.push([left + cw * f, y]);
 			note(`joins ${other}`, left + cw * 0.5, dr < 0 ? y + 14 : y - 8, 'center');
 		}
 	}
+	targets(doc, circles);
 	footer(doc, src, pw, ph, index + 2, pages);
 }
 
@@ -202,7 +206,9 @@ export async function renderTiled(src: PatternSource, paper: TilePaper): Promise
 	const { doc, done } = newDoc(`Full-size pattern ${src.number} (${TILE_PAPER[paper].name}, tiled)`, 'Full-size pattern', src.number);
 	coverPage(doc, src, paper, plan, landscape);
 	const marks = boxed(stripMarks(doc, src.pieces, plan.strip, src.number).flat());
-	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, i));
+	// Which cell is printed on which page, to name a page's neighbours.
+	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
+	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, printed, i));
 	doc.end();
 	return { bytes: await done, pages: plan.cells.length + 1, plan, landscape };
 }

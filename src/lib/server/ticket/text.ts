@@ -27,20 +27,27 @@ export interface LineStyle {
 }
 
 // Measuring text shapes it with fontkit every time; a ticket measures the same labels many times
-// while it tries page layouts, so widths are remembered per document.
-const widths = new WeakMap<Doc, Map<string, number>>();
+// while it tries page layouts, and every document sets the same words, so widths are remembered for the
+// process, per face, at 1 pt (a width grows with the letter size in proportion). Started afresh past a size.
+const widths = new Map<string, number>();
+const MAX_WIDTHS = 20_000;
+
+/** Width at 1 pt of a run of text in one face. */
+function runWidth(doc: Doc, font: string, text: string): number {
+	const key = `${font}|${text}`;
+	const hit = widths.get(key);
+	if (hit !== undefined) return hit;
+	const w = doc.font(font).fontSize(1).widthOfString(text);
+	if (widths.size >= MAX_WIDTHS) widths.clear();
+	widths.set(key, w);
+	return w;
+}
 
 /** Width of a line of text at a size. */
 export function widthOf(doc: Doc, text: string, size: number, weight: Weight = 400): number {
-	let known = widths.get(doc);
-	if (!known) widths.set(doc, (known = new Map()));
-	const key = `${weight}|${size}|${text}`;
-	const hit = known.get(key);
-	if (hit !== undefined) return hit;
 	let w = 0;
-	for (const r of runsOf(text, weight)) w += doc.font(r.font).fontSize(size).widthOfString(r.text);
-	known.set(key, w);
-	return w;
+	for (const r of runsOf(text, weight)) w += runWidth(doc, r.font, r.text);
+	return w * size;
 }
 
 function fitted(doc: Doc, text: string, s: LineStyle): { text: string; size: number } {
@@ -66,9 +73,10 @@ export function line(doc: Doc, text: string, x: number, y: number, s: LineStyle)
 	doc.fillColor(s.color ?? INK);
 	let dx = start;
 	for (const r of runsOf(f.text, weight)) {
+		const w = runWidth(doc, r.font, r.text) * f.size;
 		doc.font(r.font).fontSize(f.size);
 		doc.text(r.text, x + dx, y, { lineBreak: false, baseline: 'alphabetic' });
-		dx += doc.widthOfString(r.text);
+		dx += w;
 	}
 	doc.restore();
 	return width;
