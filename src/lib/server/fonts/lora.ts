@@ -98,10 +98,12 @@ function parsedFaces(): Map<string, unknown> {
  * end. */
 const shaped = new Map<string, Record<string, unknown>>();
 const MAX_SHAPED = 20_000;
+/** Documents since the tables' sizes were last counted (counting is not free; a document adds few words). */
+let sinceCounted = 0;
 
-function shapedFor(name: string): Record<string, unknown> {
+function shapedFor(name: string, count: boolean): Record<string, unknown> {
 	let table = shaped.get(name);
-	if (!table || Object.keys(table).length > MAX_SHAPED) shaped.set(name, (table = Object.create(null) as Record<string, unknown>));
+	if (!table || (count && Object.keys(table).length > MAX_SHAPED)) shaped.set(name, (table = Object.create(null) as Record<string, unknown>));
 	return table;
 }
 
@@ -109,10 +111,12 @@ function shapedFor(name: string): Record<string, unknown> {
  * writes a face into the file only when a page sets text in it). */
 export function registerLora(doc: PDFKit.PDFDocument) {
 	const open = doc as unknown as { _font: { layoutCache?: Record<string, unknown> } };
+	const count = ++sinceCounted >= 100;
+	if (count) sinceCounted = 0;
 	for (const [name, face] of parsedFaces()) {
 		doc.registerFont(name, face as Buffer);
 		doc.font(name);
-		if (open._font.layoutCache) open._font.layoutCache = shapedFor(name);
+		if (open._font.layoutCache) open._font.layoutCache = shapedFor(name, count);
 	}
 	doc.font(fontName('latin', 400));
 }

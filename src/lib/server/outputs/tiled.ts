@@ -132,16 +132,56 @@ function footer(doc: Doc, src: PatternSource, w: number, h: number, page: number
 	});
 }
 
-/** Alignment circles with a cross, centred on the trim lines: a page's all with the pen set once. */
+/** Radius of an alignment circle; its cross reaches 1.6 times as far. */
+const TARGET_R = 3 * MM;
+
+/** pdfkit's own number form in content streams: at most six decimals. */
+const num = (v: number) => String(Math.round(v * 1e6) / 1e6);
+
+/**
+ * The alignment circle with its cross, written once per document as a PDF form (ISO 32000-1, 8.10) and
+ * placed on each page by its centre. Every page has up to eight, and drawn out each time they were
+ * most of a page's path data, which the document then compresses. pdfkit has no call for a form, so
+ * its few operators are written here: the circle as pdfkit draws one (four Bézier quarters, k = 0.5523),
+ * the pen as `targets` used to set it.
+ */
+function targetForm(doc: Doc): PDFKit.PDFKitReference {
+	const known = forms.get(doc);
+	if (known) return known;
+	const r = TARGET_R;
+	const o = r * (4 * ((Math.SQRT2 - 1) / 3));
+	const [red, green, blue] = [1, 3, 5].map((i) => parseInt(PALETTE.ink.slice(i, i + 2), 16) / 255);
+	const ops = [
+		'0.5 w',
+		'/DeviceRGB CS',
+		`${red} ${green} ${blue} SCN`,
+		`${num(-r)} 0 m`,
+		`${num(-r)} ${num(-o)} ${num(-o)} ${num(-r)} 0 ${num(-r)} c`,
+		`${num(o)} ${num(-r)} ${num(r)} ${num(-o)} ${num(r)} 0 c`,
+		`${num(r)} ${num(o)} ${num(o)} ${num(r)} 0 ${num(r)} c`,
+		`${num(-o)} ${num(r)} ${num(-r)} ${num(o)} ${num(-r)} 0 c`,
+		'h',
+		'S',
+		`${num(-1.6 * r)} 0 m`,
+		`${num(1.6 * r)} 0 l`,
+		`0 ${num(-1.6 * r)} m`,
+		`0 ${num(1.6 * r)} l`,
+		'S'
+	];
+	const reach = 1.6 * r + 1;
+	const form = doc.ref({ Type: 'XObject', Subtype: 'Form', BBox: [-reach, -reach, reach, reach], Resources: {} });
+	form.end(ops.join('\n'));
+	forms.set(doc, form);
+	return form;
+}
+const forms = new WeakMap<Doc, PDFKit.PDFKitReference>();
+
+/** Alignment circles with a cross, centred on the trim lines. */
 function targets(doc: Doc, at: [number, number][]) {
 	if (!at.length) return;
-	const r = 3 * MM;
-	doc.save().lineWidth(0.5).strokeColor(PALETTE.ink);
-	for (const [x, y] of at) {
-		doc.circle(x, y, r).stroke();
-		doc.moveTo(x - 1.6 * r, y).lineTo(x + 1.6 * r, y).moveTo(x, y - 1.6 * r).lineTo(x, y + 1.6 * r).stroke();
-	}
-	doc.restore();
+	const page = (doc as unknown as { page: { xobjects: Record<string, PDFKit.PDFKitReference> } }).page;
+	page.xobjects.QLTarget = targetForm(doc);
+	for (const [x, y] of at) doc.addContent(`q 1 0 0 1 ${num(x)} ${num(y)} cm /QLTarget Do Q`);
 }
 
 function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], printed: Map<string, number>, index: number) {
