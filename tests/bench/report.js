@@ -385,7 +385,7 @@ function outputRows(o) {
 			met: o.tiled.median <= 3 * o.floor.median,
 			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB (floor ${Math.round(o.floorBytes / 1024)} KiB); ${o.tiled.n} runs, each timed in turn with the floor; run by run ratio median ${r3(o.ratio.median)}; CPU time ${r1(o.cpu.tiled.median)} ms vs ${r1(o.cpu.floor.median)} ms = ${r3(cpuRatio)}×`
 		}),
-		row({ id: 'outputs.a0', measure: `outputs: A0 PDF, full-circle skirt (${o.a0Pages} page${o.a0Pages === 1 ? '' : 's'})`, unit: 'ms', median: ms(o.a0), p95: r1(o.a0.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.a0.median / o.floor.median) }),
+		row({ id: 'outputs.a0', measure: `outputs: A0 PDF, pencil skirt (${o.a0Pages} page${o.a0Pages === 1 ? '' : 's'})`, unit: 'ms', median: ms(o.a0), p95: r1(o.a0.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.a0.median / o.floor.median) }),
 		row({ id: 'outputs.roll', measure: 'outputs: roll PDF (91.4 cm), full-circle skirt', unit: 'ms', median: ms(o.roll), p95: r1(o.roll.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.roll.median / o.floor.median) }),
 		row({ id: 'outputs.projector', measure: 'outputs: projector PDF, full-circle skirt', unit: 'ms', median: ms(o.projector), p95: r1(o.projector.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.projector.median / o.floor.median) }),
 		row({
