@@ -15,7 +15,7 @@ import { renderLay } from '../../src/lib/server/outputs/lay';
 import { renderSheet } from '../../src/lib/server/outputs/sheet';
 import { laysOf, sourceOf } from '../../src/lib/server/outputs/source';
 import { renderTiled } from '../../src/lib/server/outputs/tiled';
-import { makeTicket } from '../../src/lib/server/ticket/ticket';
+import { makeTicket } from '../../src/lib/server/outputs/ticket';
 import { summarise } from './stats.js';
 
 // The seed's full-circle order (QL-1007) and its cloth.

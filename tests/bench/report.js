@@ -370,7 +370,6 @@ export function printTable(rows, report) {
 function outputRows(o) {
 	if (isErr(o)) return [notMeasured('outputs', 'outputs: full-size PDFs', o?.error ?? 'failed', 'tiled ≤ 3× bare pdfkit')];
 	const ms = (/** @type {any} */ x) => r1(x.median);
-	const cpuRatio = o.cpu ? o.cpu.tiled.median / o.cpu.floor.median : null;
 	return [
 		row({
 			id: 'outputs.tiled-a4',
@@ -383,7 +382,7 @@ function outputRows(o) {
 			ratio: r3(o.tiled.median / o.floor.median),
 			target: '≤ 3× floor',
 			met: o.tiled.median <= 3 * o.floor.median,
-			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB (floor ${Math.round(o.floorBytes / 1024)} KiB); ${o.tiled.n} runs, each timed in turn with the floor; run by run ratio median ${r3(o.ratio.median)}; CPU time ${r1(o.cpu.tiled.median)} ms vs ${r1(o.cpu.floor.median)} ms = ${r3(cpuRatio)}×`
+			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB (floor ${Math.round(o.floorBytes / 1024)} KiB); ${o.tiled.n} runs, each timed in turn with the floor; run by run ratio median ${r3(o.ratio.median)}; CPU time ${r1(o.cpu.tiled.median)} ms vs ${r1(o.cpu.floor.median)} ms = ${r3(o.cpu.tiled.median / o.cpu.floor.median)}×`
 		}),
 		row({ id: 'outputs.a0', measure: `outputs: A0 PDF, pencil skirt (${o.a0Pages} page${o.a0Pages === 1 ? '' : 's'})`, unit: 'ms', median: ms(o.a0), p95: r1(o.a0.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.a0.median / o.floor.median) }),
 		row({ id: 'outputs.roll', measure: 'outputs: roll PDF (91.4 cm), full-circle skirt', unit: 'ms', median: ms(o.roll), p95: r1(o.roll.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.roll.median / o.floor.median) }),

@@ -5,7 +5,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { fabrics, houseRules, orderLines, orders, outputPreferences, styles, users } from '../../src/lib/server/db/schema';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
-import { loadTickets } from '../../src/lib/server/ticket/load';
+import { loadTickets } from '../../src/lib/server/outputs/ticket-load';
 import { testDb } from '../support/db';
 import { testEnv } from '../support/env';
 import { largestPieceOnSheet } from '../support/tiles';

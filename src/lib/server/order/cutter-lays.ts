@@ -5,7 +5,7 @@ import { asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { db } from '../db';
 import { fabrics, houseRules, orderLines, orders, type StoredCutterLay } from '../db/schema';
-import { redraftLine } from '../ticket/ticket';
+import { redraftLine } from '../outputs/ticket';
 import { cutterLayInSlices, DraftInputError } from '../../drafting';
 import { clothOf, cutterLayFits } from './cloth';
 

@@ -18,7 +18,7 @@ import {
 	type Role
 } from '../db/schema';
 import { moveLocked, MoveRefused, type Actor } from './stage';
-import { redraftLine } from '../ticket/ticket';
+import { redraftLine } from '../outputs/ticket';
 import { combinedLayInSlices, DraftInputError, type LayOrder, type Layout } from '../../drafting';
 import { canMove, STAGE_LABELS } from '../../orders/stages';
 import { formatMetres } from '../../format';

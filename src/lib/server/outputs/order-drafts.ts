@@ -5,7 +5,7 @@ import { asc, eq } from 'drizzle-orm';
 import { DraftInputError, type Draft } from '../../drafting';
 import type { Db } from '../db/client';
 import { fabrics, houseRules, orderLines, orders, styles } from '../db/schema';
-import { redraftLine } from '../ticket/ticket';
+import { redraftLine } from './ticket';
 import { OutputProblem } from './problem';
 
 export interface OrderDrafts {

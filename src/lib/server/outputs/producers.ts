@@ -5,7 +5,7 @@ import { DraftInputError } from '../../drafting';
 import type { Db } from '../db/client';
 import { siteOrigin } from '../origin';
 import { shopSettingsOf } from '../house/rules';
-import { loadTickets } from '../ticket/load';
+import { loadTickets } from './ticket-load';
 import { renderTickets } from '../ticket/pdf';
 import { produceDxf } from './dxf';
 import { produceLayPdf, producePatternPdf } from './index';

@@ -5,7 +5,7 @@ import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
 import { resolveRules } from '../../drafting';
 import type { StoredChoice } from '../order/lines';
-import { makeTicket } from '../ticket/ticket';
+import { makeTicket } from './ticket';
 import { OutputError } from './errors';
 import { K } from './doc';
 import { A0, a0Plan, renderSheet } from './sheet';

@@ -7,8 +7,8 @@ import type { Layout } from '../../drafting/fabric';
 import { cutterLay } from '../../drafting/nest/cutter';
 import type { Db } from '../db/client';
 import { orderLines, orders, styles } from '../db/schema';
-import { loadTickets } from '../ticket/load';
-import type { Ticket } from '../ticket/ticket';
+import { loadTickets } from './ticket-load';
+import type { Ticket } from './ticket';
 import { OutputError } from './errors';
 
 /** One piece to print, with the order line it belongs to. */

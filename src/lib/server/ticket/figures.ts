@@ -3,7 +3,7 @@ import type { DartFigure, Piece } from '../../drafting';
 import { formatCm } from '../../drafting';
 import type { Frame } from './page-one';
 import { INK, PENCIL, heading, line, table, widthOf } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 import { allowanceWords, cutSize } from './words';
 
 type Doc = PDFKit.PDFDocument;

@@ -7,7 +7,7 @@ import { drawMarks, pdfMeasure } from './draw-pdf';
 import type { Area } from '../../drafting/drawing/sheets';
 import type { Frame } from './page-one';
 import { INK, PENCIL, THREAD, heading, line, para, ptPerCm, rule } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 type Doc = PDFKit.PDFDocument;
 

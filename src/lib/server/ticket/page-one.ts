@@ -5,7 +5,7 @@ import { formatDate } from '../../format';
 import { STAGE_LABELS } from '../../orders/stages';
 import { drawQr } from './qr';
 import { INK, PENCIL, THREAD, heading, line, rule, table } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 import { adjustmentWords, halvesWords, kneeWords, optionRows, styleKindName } from './words';
 
 type Doc = PDFKit.PDFDocument;

@@ -6,7 +6,7 @@ import { PDFParse } from 'pdf-parse';
 import { afterAll, describe, expect, it } from 'vitest';
 import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '../../drafting';
 import { renderTickets } from './pdf';
-import { makeTicket, type TicketInput } from './ticket';
+import { makeTicket, type TicketInput } from '../outputs/ticket';
 
 // Invented order data; the figures the ticket must print are the engine's own output for it, drafted
 // here beside the ticket (the engine's numbers are the values under test, not copied constants).

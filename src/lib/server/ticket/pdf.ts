@@ -12,7 +12,7 @@ import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOf
 import { banners, facts, fitAdjustments, header, type Frame } from './page-one';
 import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
 import { MM, heading } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 export type Paper = 'A4' | 'Letter';
 

@@ -8,7 +8,7 @@ import { drawMarks, pdfMeasure } from './draw-pdf';
 import { placeOf, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
 import type { Frame } from './page-one';
 import { MM, PENCIL, line, ptPerCm } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 type Doc = PDFKit.PDFDocument;
 

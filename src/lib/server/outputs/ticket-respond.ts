@@ -6,8 +6,8 @@ import { failureJson } from '../answer';
 import type { Db } from '../db/client';
 import { shopSettingsOf } from '../house/rules';
 import { siteOrigin } from '../origin';
-import { loadTickets } from './load';
-import { renderTickets } from './pdf';
+import { loadTickets } from './ticket-load';
+import { renderTickets } from '../ticket/pdf';
 
 /** The most orders one batch may print (a day's cutting, with room to spare). */
 export const MAX_BATCH = 50;
