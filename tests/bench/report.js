@@ -162,7 +162,7 @@ export function rowsFrom(raw) {
 				floor: r1(job.rssBeforeMb),
 				floorWhat: 'app RSS before the job',
 				ratio: r3(job.peakMb / job.rssBeforeMb),
-				notes: `${job.peakFrom}; sampled peak ${r1(job.sampledPeakMb)} MB; ${r1(job.seconds)} s to done, zip ${Math.round(job.zipBytes / 1024)} KB, ${batch.failures} orders not made`
+				notes: `${job.peakFrom}; sampled peak ${r1(job.sampledPeakMb)} MB; ${r1(job.seconds)} s to done, zip ${Math.round(job.zipBytes / 1024)} KB, ${job.failures} orders not made`
 			})
 		);
 	}

@@ -25,6 +25,9 @@ export interface PieceStyle extends Fit {
 	/** Where name and cut are written when the labels find no place inside the piece (else they stay
 	 * where the engine put them): the piece's box in drawing cm. */
 	caption?: { x: number; y: number; w: number; h: number };
+	/** Bands (drawing cm) the label stack keeps out of when it can, after the marks themselves: the
+	 * edges of a tiled print's pages, so no word is cut by a trim line or lies under a page's own notes. */
+	edges?: Rect[];
 }
 
 /** Room kept left of and below each piece for its dimension lines, in points of paper. */
@@ -166,7 +169,9 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 		const o = sub(f({ x: 1, y: 0 }), f({ x: 0, y: 0 }));
 		const turn = (Math.atan2(o.y, o.x) * 180) / Math.PI;
 		const laid = layoutStack(s, stackLines(p, s), poly, centre, upright(first.angle + turn));
-		const placed = placeStack(s, laid, poly, [[...avoid, ...soft], avoid, avoid.slice(1)]);
+		const edges = s.edges ?? [];
+		const tiers = edges.length ? [[...avoid, ...soft, ...edges], [...avoid, ...edges]] : [];
+		const placed = placeStack(s, laid, poly, [...tiers, [...avoid, ...soft], avoid, avoid.slice(1)]);
 		clear = placed.clear;
 		const st = placed.stack;
 		if (clear || !s.caption) {

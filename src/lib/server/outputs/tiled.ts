@@ -3,7 +3,7 @@
 // cell of the sheet's grid (row letter, column number), showing a strip of the neighbouring cells past
 // its trim line, so a page trimmed on its left and top edges laps over its neighbours with the circles
 // on the trim lines matching.
-import { PALETTE } from '../../drafting/drawing/model';
+import { PALETTE, type Rect } from '../../drafting/drawing/model';
 import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '../../drafting/drawing/tiles';
 import { flatten } from '../../drafting/outline';
 import { drawMarks } from '../ticket/draw-pdf';
@@ -240,12 +240,28 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	footer(doc, src, pw, ph, index + 2, pages);
 }
 
+/** How far (cm) either side of a page edge the piece names keep clear when they can: the trim line, its
+ * circles (4.8 mm) and the page's "joins" notes lie there, and a name split over two pages reads badly. */
+const EDGE_BAND = 1.2;
+
+/** The bands round the edges between the sheet's cells, in strip cm. */
+function pageEdges(plan: TilePlan): Rect[] {
+	const [w, h] = [plan.cols * plan.cellW, plan.rows * plan.cellH];
+	const out: Rect[] = [];
+	for (let c = 1; c < plan.cols; c++) out.push({ x0: c * plan.cellW - EDGE_BAND, y0: 0, x1: c * plan.cellW + EDGE_BAND, y1: h });
+	for (let r = 1; r < plan.rows; r++) out.push({ x0: 0, y0: r * plan.cellH - EDGE_BAND, x1: w, y1: r * plan.cellH + EDGE_BAND });
+	return out;
+}
+
+/** Every piece's marks on the tiled sheet, in strip cm, its words kept off the page edges when they can. */
+export const tiledMarks = (doc: Doc, src: PatternSource, plan: TilePlan) => stripMarks(doc, src.pieces, plan.strip, src.number, undefined, pageEdges(plan));
+
 /** The tiled PDF of an order's pieces. */
 export async function renderTiled(src: PatternSource, paper: TilePaper): Promise<{ bytes: Uint8Array; pages: number; plan: TilePlan; landscape: boolean }> {
 	const { plan, landscape } = tilePlanFor(src, paper);
 	const { doc, done } = newDoc(`Full-size pattern ${src.number} (${TILE_PAPER[paper].name}, tiled)`, 'Full-size pattern', src.number);
 	coverPage(doc, src, paper, plan, landscape);
-	const marks = boxed(stripMarks(doc, src.pieces, plan.strip, src.number).flat());
+	const marks = boxed(tiledMarks(doc, src, plan).flat());
 	// Which cell is printed on which page, to name a page's neighbours.
 	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
 	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, printed, i));
