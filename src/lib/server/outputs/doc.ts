@@ -55,11 +55,11 @@ export const FULL_SIZE_WORDS = 2.5;
  * Every piece in its spot on the strip as marks in strip cm. `scale` enlarges the words and symbols
  * (a projected pattern is read from a metre or more away).
  */
-export function stripMarks(doc: Doc, pieces: SourcePiece[], plan: StripPlan, number: string, scale = FULL_SIZE_WORDS, edges: Rect[] = []): Mark[][] {
+export function stripMarks(doc: Doc, pieces: SourcePiece[], plan: StripPlan, number: string, scale = FULL_SIZE_WORDS, keepOff?: { edges: Rect[]; wrap: number }): Mark[][] {
 	const measure = pdfMeasure(doc);
 	return pieces.map((sp, i) => {
 		const map = spotMap(sp.piece, plan.spots[i]);
-		return pieceMarks(labelled(sp, number), map, { u: scale / K, measure, readable: true, units: 'cm', notchLabels: true, edges }).marks;
+		return pieceMarks(labelled(sp, number), map, { u: scale / K, measure, readable: true, units: 'cm', notchLabels: true, keepOff }).marks;
 	});
 }
 

@@ -254,7 +254,8 @@ function pageEdges(plan: TilePlan): Rect[] {
 }
 
 /** Every piece's marks on the tiled sheet, in strip cm, its words kept off the page edges when they can. */
-export const tiledMarks = (doc: Doc, src: PatternSource, plan: TilePlan) => stripMarks(doc, src.pieces, plan.strip, src.number, undefined, pageEdges(plan));
+export const tiledMarks = (doc: Doc, src: PatternSource, plan: TilePlan) =>
+	stripMarks(doc, src.pieces, plan.strip, src.number, undefined, { edges: pageEdges(plan), wrap: Math.min(plan.cellW, plan.cellH) - 2 * EDGE_BAND - 1 });
 
 /** The tiled PDF of an order's pieces. */
 export async function renderTiled(src: PatternSource, paper: TilePaper): Promise<{ bytes: Uint8Array; pages: number; plan: TilePlan; landscape: boolean }> {
