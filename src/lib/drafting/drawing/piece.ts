@@ -190,7 +190,9 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 			// that has only a strip of one page to itself); else placed as anywhere else.
 			const { edges, wrap } = s.keepOff;
 			const off = [[...avoid, ...soft, ...edges], [...avoid, ...edges], [...avoid.slice(1), ...edges]];
-			const strict = { ...s, readable: false };
+			// Half as fine a search (some 1 cm steps on a skirt piece): it may run several times, each over
+			// every place when the page edges leave none.
+			const strict = { ...s, readable: false, across: 60 };
 			placed = placeStack(strict, laid, poly, off);
 			for (const k of [1, 0.6, 0.4]) {
 				if (placed.clear) break;
