@@ -6,18 +6,19 @@ import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { createDb } from '../../src/lib/server/db/client';
 import { deliveredOrder } from '../support/fit';
 import { eventually, mailsTo } from '../support/shop';
+import { pdfText } from '../support/pixels';
 
 // The fit loop end to end: she says "waist too tight by 2 cm" with a photo; the owner approves a remake
 // with 2 cm more at the waist; the remake is in the queue with the changed figures on its ticket page;
 // her measure card shows the change and why; the mails arrive. QL_SHOTS=dir also keeps a screenshot of
-// each step at a phone's width (390 px) and a desktop's.
+// each step on a phone's window (390 × 844) and a desktop's (1280 × 900).
 const SHOTS = process.env.QL_SHOTS;
 async function shot(page: Page, name: string) {
 	if (!SHOTS) return;
 	mkdirSync(SHOTS, { recursive: true });
 	const size = page.viewportSize()!;
-	for (const [label, width] of [['phone', 390], ['desktop', 1280]] as const) {
-		await page.setViewportSize({ width, height: 900 });
+	for (const [label, width, height] of [['phone', 390, 844], ['desktop', 1280, 900]] as const) {
+		await page.setViewportSize({ width, height });
 		await page.screenshot({ path: join(SHOTS, `${name}-${label}.png`), fullPage: true });
 	}
 	await page.setViewportSize(size);
@@ -54,6 +55,13 @@ test('a tight waist comes back as a remake drafted 2 cm larger, and her card lea
 	await page.getByLabel(/I agree that the atelier keeps my photos/).check();
 	await page.getByLabel(/A remake: you cut it again/).check();
 	await shot(page, '2-fit-form');
+	if (SHOTS) {
+		// The photo consent, on its own: what she agrees to and for how long.
+		for (const [label, width, height] of [['phone', 390, 844], ['desktop', 1280, 900]] as const) {
+			await page.setViewportSize({ width, height });
+			await page.getByRole('group', { name: 'Photos (optional)' }).screenshot({ path: join(SHOTS, `2b-photo-consent-${label}.png`) });
+		}
+	}
 	await page.getByRole('button', { name: 'Send my fit report' }).click();
 	await expect(page.getByTestId('fit-sent')).toBeVisible();
 	await expect(page.getByTestId('fit-report')).toContainText('Waist: a little tight, by 2 cm');
@@ -81,12 +89,24 @@ test('a tight waist comes back as a remake drafted 2 cm larger, and her card lea
 	await expect(owner.getByTestId('remake-changes')).toContainText('Waist 72 cm → 74 cm');
 	await shot(owner, '6-remake-ticket');
 	const remakeNumber = (await owner.getByRole('heading', { level: 1 }).textContent())!.trim();
+	// The printed ticket the cutter works from says what changed against the first cut, old and new,
+	// why, and the report it came from (read back with poppler's pdftotext).
+	const remakeId = new URL(owner.url()).pathname.split('/').pop();
+	const ticket = await owner.request.get(`/workroom/orders/${remakeId}/ticket.pdf`);
+	expect(ticket.status()).toBe(200);
+	const text = pdfText(await ticket.body(), 1, 1).replace(/\s+/g, ' ');
+	expect(text).toContain(`Remake of order ${order.number} — changes against the first cut`);
+	expect(text).toContain('Waist: first cut 72 cm, now 74 cm');
+	expect(text).toMatch(/From fit report \d+ of \d+ \w+ \d{4}\. Why: We cut it again with 2 cm more at the waist\./);
 	await owner.goto('/workroom');
 	const row = owner.getByTestId('queue-row').filter({ hasText: remakeNumber });
 	await expect(row.getByTestId('remake-mark')).toHaveText('Remake');
 	await shot(owner, '7-queue');
 	await owner.goto('/admin/fit');
 	await shot(owner, '8-owner-fit-page');
+	await owner.goto('/admin/settings');
+	await expect(owner.getByTestId('promise-preview')).toContainText('within 30 days of delivery');
+	await shot(owner, '10-settings');
 	await ownerContext.close();
 
 	// Her card holds the correction, with its reason; the decision is on her report.

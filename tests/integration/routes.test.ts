@@ -62,6 +62,7 @@ const ROUTES: Row[] = [
 	{ route: '/admin/orders/[id=id]', path: '/admin/orders/1', expect: OWNER },
 	{ route: '/admin/orders.csv', path: '/admin/orders.csv', expect: OWNER },
 	{ route: '/admin/rules', path: '/admin/rules', expect: OWNER },
+	{ route: '/admin/settings', path: '/admin/settings', expect: OWNER },
 	{ route: '/admin/catalogue', path: '/admin/catalogue', expect: OWNER },
 	{ route: '/admin/catalogue/styles/new', path: '/admin/catalogue/styles/new', expect: OWNER },
 	{ route: '/admin/catalogue/styles/[id=id]', path: '/admin/catalogue/styles/1', expect: OWNER },

@@ -1,6 +1,6 @@
 // draftSkirt: measurements → checked → block → style → pieces with allowances → figures and warnings.
 import { blockFigures, blockWarnings, draftBlock, type Block, type CheckPair, type Figures, type PanelFigures } from './block';
-import { DraftInputError } from './errors';
+import { DraftInputError, lengthProblem } from './errors';
 import { joinSides } from './asymmetric';
 import { facing, pocketBag, waistband, withZipTrim } from './extras';
 import { measurementWarnings, resolveMeasurements, validateMeasurements, type Measurements, type ResolvedMeasurements } from './measurements';
@@ -105,14 +105,10 @@ export function draftSkirt(measurements: Measurements, choice?: SkirtChoiceInput
 		if (over) {
 			const limit = largestHip(m, r, backOnFold);
 			throw new DraftInputError([
-				{
-					field: 'hip',
-					message: `Please check your hip: ${formatCm(m.hip)} over a ${formatCm(m.waist)} waist is more shaping than darts can take (up to about ${formatCm(Math.floor(limit))} fits a block). If it is right, confirm it: we then draft it with the side seams taking the rest, and advise a fitting in calico.`,
-					value: m.hip,
-					limit,
-					max: Math.floor(limit),
-					confirmable: true
-				}
+				lengthProblem(
+					{ field: 'hip', value: m.hip, limit, max: Math.floor(limit), confirmable: true },
+					(w) => `Please check your hip: ${w.len(m.hip)} over a ${w.len(m.waist)} waist is more shaping than darts can take (up to about ${w.len(Math.floor(limit))} fits a block). If it is right, confirm it: we then draft it with the side seams taking the rest, and advise a fitting in calico.`
+				)
 			]);
 		}
 	}

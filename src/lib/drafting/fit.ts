@@ -1,7 +1,7 @@
 // Fit adjustments: the corrections a made-to-measure workroom makes to the block for a figure, beyond
 // the four girths. Plain data, each amount in cm as the cutter moves the line on the pattern, each with
 // its range; amounts are typical starting points (TRADE.md "Figure adjustments", common practice).
-import type { FieldProblem } from './errors';
+import { lengthProblem, type FieldProblem } from './errors';
 
 /** A side of the wearer's body. */
 export type BodySide = 'left' | 'right';
@@ -79,7 +79,7 @@ export function resolveFit(input: unknown): { fit: ResolvedFit; problems: FieldP
 		if (v === undefined || v === null) return 0;
 		const { min, max } = FIT_LIMITS[key];
 		if (typeof v !== 'number' || !Number.isFinite(v) || v < min || v > max) {
-			problems.push({ field: `adjustments.${key}`, message: `The ${WORDS[key]} must be from ${min} to ${max} cm.`, min, max, ...(typeof v === 'number' && Number.isFinite(v) ? { value: v, limit: v < min ? min : max } : {}) });
+			problems.push(lengthProblem({ field: `adjustments.${key}`, min, max, ...(typeof v === 'number' && Number.isFinite(v) ? { value: v, limit: v < min ? min : max } : {}) }, (w) => `The ${WORDS[key]} must be ${w.range(min, max)}.`));
 			return 0;
 		}
 		// Amounts are taken to the tenth of a millimetre, finer than any tape or hand reads: a figure a

@@ -2,7 +2,7 @@
 // across. Laid flat, a skirt shows half of each girth, so each width is doubled; that girth is the
 // garment's, body plus the ease it was made with. We do not know that skirt's ease, so we take off our
 // own house ease (the ease our draft will add back), and the order says the figures were found this way.
-import type { FieldProblem } from './errors';
+import { lengthProblem, type FieldProblem } from './errors';
 import { DEFAULT_RULES, type HouseRules } from './rules';
 import { toMm } from './units';
 
@@ -42,8 +42,8 @@ export function validateFlat(input: Partial<Record<keyof FlatGarment, unknown>>)
 	for (const k of Object.keys(FLAT_LIMITS) as (keyof FlatGarment)[]) {
 		const v = input[k];
 		const { min, max } = FLAT_LIMITS[k];
-		if (typeof v !== 'number' || !Number.isFinite(v)) out.push({ field: k, message: `Enter the ${LABEL[k]} in centimetres, as a number.`, min, max });
-		else if (v < min || v > max) out.push({ field: k, message: `The ${LABEL[k]} of a skirt laid flat is from ${min} to ${max} cm: please measure again.`, min, max });
+		if (typeof v !== 'number' || !Number.isFinite(v)) out.push(lengthProblem({ field: k, min, max }, (w) => `Enter the ${LABEL[k]} in ${w.unitName}, as a number.`));
+		else if (v < min || v > max) out.push(lengthProblem({ field: k, min, max }, (w) => `The ${LABEL[k]} of a skirt laid flat is ${w.range(min, max)}: please measure again.`));
 	}
 	if (!out.length && (input.hipDepth as number) >= (input.length as number)) {
 		out.push({ field: 'hipDepth', message: 'Measure the hip across above the hem: the depth must be shorter than the length.' });

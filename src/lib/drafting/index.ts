@@ -69,7 +69,7 @@ export {
 	type VentChoice,
 	type WaistFinish
 } from './options';
-export { DraftInputError, type FieldProblem } from './errors';
+export { DraftInputError, problemIn, type FieldProblem } from './errors';
 export { MEASUREMENT_LIMITS, validateMeasurements, type Measurements, type ResolvedMeasurements } from './measurements';
 export type { BackFigures, Block, CheckPair, DartFigure, Figures, FrontFigures, PanelFigures } from './block';
 export type { DartGeom, Panel, PanelSpec } from './panel';

@@ -1,5 +1,5 @@
 // The shopper's four measurements: what the engine accepts, and the sentences it says about them.
-import { DraftInputError, type FieldProblem } from './errors';
+import { DraftInputError, lengthProblem, type FieldProblem } from './errors';
 import { resolveFit, type FitAdjustments, type ResolvedFit } from './fit';
 import type { HouseRules } from './rules';
 import { formatCm } from './units';
@@ -56,10 +56,10 @@ const LABEL = { waist: 'waist', hip: 'hip', length: 'skirt length', waistToHip: 
 
 function numberProblem(field: keyof typeof LABEL, v: unknown, min: number, max: number): FieldProblem | null {
 	if (typeof v !== 'number' || !Number.isFinite(v)) {
-		return { field, message: `Enter your ${LABEL[field]} in centimetres, as a number.`, min, max };
+		return lengthProblem({ field, min, max }, (w) => `Enter your ${LABEL[field]} in ${w.unitName}, as a number.`);
 	}
 	if (v < min || v > max) {
-		return { field, message: `Your ${LABEL[field]} must be from ${min} to ${max} cm: please measure again.`, min, max };
+		return lengthProblem({ field, min, max }, (w) => `Your ${LABEL[field]} must be ${w.range(min, max)}: please measure again.`);
 	}
 	return null;
 }
@@ -83,37 +83,35 @@ export function validateMeasurements(input: unknown, defaultWaistToHip = 22): Fi
 	}
 	if (!problems.length && (m.hip as number) - (m.waist as number) > L.hipOverWaistPerDepth * depth + 1e-9) {
 		const max = Math.floor((m.waist as number) + L.hipOverWaistPerDepth * depth);
-		problems.push({
-			field: 'hip',
-			message: `Please check your hip and your waist-to-hip depth: a hip more than ${Math.round(L.hipOverWaistPerDepth * depth)} cm larger than the waist over ${formatCm(depth)} is more shaping than we can draft. Measure again, or ask us about a fitting.`,
-			max
-		});
+		problems.push(
+			lengthProblem(
+				{ field: 'hip', max },
+				(w) => `Please check your hip and your waist-to-hip depth: a hip more than ${w.len(Math.round(L.hipOverWaistPerDepth * depth))} larger than the waist over ${w.len(depth)} is more shaping than we can draft. Measure again, or ask us about a fitting.`
+			)
+		);
 	}
 	if (m.waistToKnee !== undefined && m.waistToKnee !== null) {
 		const p = numberProblem('waistToKnee', m.waistToKnee, L.waistToKnee.min, L.waistToKnee.max);
 		push(p);
 		const knee = m.waistToKnee as number;
 		if (!p && knee < depth + L.waistToKnee.belowHip) {
-			problems.push({
-				field: 'waistToKnee',
-				message: `Please check your waist-to-knee length: ${formatCm(knee)} puts your knee less than ${L.waistToKnee.belowHip} cm below your hip line (${formatCm(depth)} down).`,
-				min: Math.ceil(depth + L.waistToKnee.belowHip),
-				max: L.waistToKnee.max,
-				value: knee,
-				limit: depth + L.waistToKnee.belowHip
-			});
+			problems.push(
+				lengthProblem(
+					{ field: 'waistToKnee', min: Math.ceil(depth + L.waistToKnee.belowHip), max: L.waistToKnee.max, value: knee, limit: depth + L.waistToKnee.belowHip },
+					(w) => `Please check your waist-to-knee length: ${w.len(knee)} puts your knee less than ${w.len(L.waistToKnee.belowHip)} below your hip line (${w.len(depth)} down).`
+				)
+			);
 		}
 	}
 	if (!problems.length && m.confirmed !== true && (m.waist as number) - (m.hip as number) > L.waistOverHipToConfirm) {
 		const limit = (m.hip as number) + L.waistOverHipToConfirm;
-		problems.push({
-			field: 'waist',
-			message: `Please check your waist and hip: a waist ${formatCm((m.waist as number) - (m.hip as number))} larger than the hip is rare. If both are right, confirm them and we draft for them.`,
-			value: m.waist as number,
-			limit,
-			max: Math.floor(limit),
-			confirmable: true
-		});
+		const over = (m.waist as number) - (m.hip as number);
+		problems.push(
+			lengthProblem(
+				{ field: 'waist', value: m.waist as number, limit, max: Math.floor(limit), confirmable: true },
+				(w) => `Please check your waist and hip: a waist ${w.len(over)} larger than the hip is rare. If both are right, confirm them and we draft for them.`
+			)
+		);
 	}
 	const fit = resolveFit(m.adjustments);
 	problems.push(...fit.problems);
@@ -124,20 +122,20 @@ export function validateMeasurements(input: unknown, defaultWaistToHip = 22): Fi
 	const lowered = fit.fit.hollowBack + (fit.fit.oneHip?.higher ?? 0);
 	const room = Math.floor(LOWERED_BACK_SHARE * depth * 10) / 10;
 	if (!fit.problems.length && lowered > room + 1e-9) {
-		problems.push({
-			field: 'adjustments.hollowBack',
-			message: `Together the hollow back and the higher hip lower the back waist ${formatCm(lowered)}; over a ${formatCm(depth)} waist-to-hip depth a block takes at most ${formatCm(room)}. Please check them, or ask us about a fitting in calico.`,
-			value: lowered,
-			limit: room,
-			max: room
-		});
+		problems.push(
+			lengthProblem(
+				{ field: 'adjustments.hollowBack', value: lowered, limit: room, max: room },
+				(w) => `Together the hollow back and the higher hip lower the back waist ${w.len(lowered)}; over a ${w.len(depth)} waist-to-hip depth a block takes at most ${w.len(room)}. Please check them, or ask us about a fitting in calico.`
+			)
+		);
 	}
 	const minLength = Math.ceil(depth + L.length.belowHip);
-	const lp = numberProblem('length', m.length, minLength, L.length.max);
-	if (lp && typeof m.length === 'number' && Number.isFinite(m.length) && m.length < minLength) {
-		lp.message = `Your skirt length must reach at least ${L.length.belowHip} cm below your hip line: ${minLength} cm or more.`;
-	}
-	push(lp);
+	const short = typeof m.length === 'number' && Number.isFinite(m.length) && m.length < minLength;
+	push(
+		short
+			? lengthProblem({ field: 'length', min: minLength, max: L.length.max }, (w) => `Your skirt length must reach at least ${w.len(L.length.belowHip)} below your hip line: ${w.atLeast(minLength)}.`)
+			: numberProblem('length', m.length, minLength, L.length.max)
+	);
 	return problems;
 }
 

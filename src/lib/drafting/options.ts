@@ -1,5 +1,5 @@
 // Styles and options the shopper chooses, their labels for the shop, and how a choice is completed.
-import type { FieldProblem } from './errors';
+import { lengthProblem, type FieldProblem } from './errors';
 import type { ResolvedMeasurements } from './measurements';
 import type { HouseRules } from './rules';
 import { formatCm } from './units';
@@ -129,7 +129,7 @@ export function resolveChoice(input: SkirtChoiceInput | undefined, m: ResolvedMe
 	let hemDepth = circle ? rules.allowances.circleHem : rules.allowances.hem;
 	if (c.hemDepth !== undefined) {
 		if (typeof c.hemDepth !== 'number' || !Number.isFinite(c.hemDepth) || c.hemDepth < 1 || c.hemDepth > 10) {
-			problems.push({ field: 'choice.hemDepth', message: 'The hem depth must be from 1 to 10 cm.', min: 1, max: 10 });
+			problems.push(lengthProblem({ field: 'choice.hemDepth', min: 1, max: 10 }, (w) => `The hem depth must be ${w.range(1, 10)}.`));
 		} else hemDepth = c.hemDepth;
 	}
 	if (circle && hemDepth > 2.5) warnings.push('A deep hem will not lie flat on the curved hem of a circle skirt: 1.5 cm or less is usual.');
@@ -140,7 +140,7 @@ export function resolveChoice(input: SkirtChoiceInput | undefined, m: ResolvedMe
 	if (closureIn.length !== undefined) {
 		const v = closureIn.length;
 		if (typeof v !== 'number' || !Number.isFinite(v) || v < 10 || v > maxZip) {
-			problems.push({ field: 'choice.closure.length', message: `The zip length must be from 10 to ${Math.floor(maxZip)} cm for this skirt.`, min: 10, max: Math.floor(maxZip) });
+			problems.push(lengthProblem({ field: 'choice.closure.length', min: 10, max: Math.floor(maxZip) }, (w) => `The zip length must be ${w.range(10, Math.floor(maxZip))} for this skirt.`));
 		} else {
 			zipLength = v;
 			if (v < m.hipDepth - 4 && m.waist < m.hip) warnings.push(`A ${formatCm(v)} zip stops well above your hip line: the skirt may be hard to put on.`);

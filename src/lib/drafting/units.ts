@@ -43,3 +43,31 @@ export function formatBuy(cm: number, units: Units = 'cm'): string {
 	if (units === 'cm') return formatCm(Math.ceil(cm * 10 - 1e-9) / 10);
 	return formatInches(inToCm(Math.ceil(cmToIn(cm) * 8 - 1e-9) / 8));
 }
+
+/** A limit as she would type it: decimal inches to the tenth ("13.8"), centimetres as given. */
+const typedNumber = (cm: number, units: Units) => (units === 'in' ? cmToIn(cm).toFixed(1).replace(/\.0$/, '') : String(cm));
+
+/**
+ * How the engine's sentences name lengths in the shopper's units, built from the numbers themselves (never
+ * by rewriting English text): limits she types ("from 13.8 to 31.5 in"), lengths as a tape reads them (⅛″).
+ */
+export interface LengthWords {
+	/** "centimetres" or "inches". */
+	unitName: string;
+	/** "from 35 to 80 cm" / "from 13.8 to 31.5 in". */
+	range(min: number, max: number): string;
+	/** "26 cm or more" / "10.2 in or more". */
+	atLeast(min: number): string;
+	/** One length: "22.5 cm" / "8⅞″". */
+	len(cm: number): string;
+}
+
+export function lengthWords(units: Units): LengthWords {
+	const unit = units === 'in' ? 'in' : 'cm';
+	return {
+		unitName: units === 'in' ? 'inches' : 'centimetres',
+		range: (min, max) => `from ${typedNumber(min, units)} to ${typedNumber(max, units)} ${unit}`,
+		atLeast: (min) => `${typedNumber(min, units)} ${unit} or more`,
+		len: (cm) => formatLength(cm, units)
+	};
+}

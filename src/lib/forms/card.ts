@@ -1,10 +1,9 @@
 // The measure card's optional parts, edited in the account: the waist-to-knee length and the fit
 // adjustments. Read from a plain form post; checked by the engine's own rules with the card's girths.
 import type { FitAdjustments } from '../drafting/fit';
-import { validateMeasurements } from '../drafting/measurements';
 import { inToCm } from '../drafting/units';
+import { measurementProblems } from './quote';
 import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing, type FitField, type FitForm } from './fit';
-import { inUnits } from './units';
 
 export type CardFitForm = FitForm & { waistToKnee: number | null };
 export type CardFitErrors = Partial<Record<FitField | 'waistToKnee', string[]>>;
@@ -42,9 +41,9 @@ export function checkCardFit(card: CardGirths, values: CardFitForm, errors: Card
 	const m = { waist: card.waist, hip: card.hip, length: card.length, ...(card.waistToHip === null ? {} : { waistToHip: card.waistToHip }), ...(knee === null ? {} : { waistToKnee: knee }), ...(adjustments ? { adjustments } : {}) };
 	// Only what this form changes: the card's girths were checked when it was saved, and a figure she
 	// confirmed then is not asked again here.
-	for (const p of validateMeasurements(m)) {
+	for (const p of measurementProblems(m, units)) {
 		const field = FIT_FIELD_OF[p.field] ?? (p.field === 'waistToKnee' ? 'waistToKnee' : null);
-		if (field && !p.confirmable) (out[field] ??= []).push(inUnits(p.message, units));
+		if (field) (out[field] ??= []).push(p.message);
 	}
 	if (sideMissing(values)) (out.oneHipSide ??= []).push('Say which hip is higher or fuller: left or right.');
 	return Object.keys(out).length ? { ok: false as const, errors: out } : { ok: true as const, waistToKnee: knee, adjustments };

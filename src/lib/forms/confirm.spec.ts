@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { confirmAsk, likelyFigure, slipsOf } from './confirm';
+import { lengthProblem } from '../drafting/errors';
 
 describe('did you mean …?', () => {
 	it('lists the slips one keystroke away', () => {
@@ -25,7 +26,7 @@ describe('did you mean …?', () => {
 	});
 
 	it('works in inches: 59 in typed for 95? no, 95 in is past the limit; the message is in inches', () => {
-		const ask = confirmAsk([{ field: 'hip', message: 'Please check your hip: 150 cm over a 65 cm waist', value: 150, limit: 130.6, confirmable: true }], { waist: 25.5, hip: 59 }, { waist: 64.8, hip: 149.9 }, 'in');
+		const ask = confirmAsk([lengthProblem({ field: 'hip', value: 150, limit: 130.6, confirmable: true }, (w) => `Please check your hip: ${w.len(150)} over a ${w.len(65)} waist`)], { waist: 25.5, hip: 59 }, { waist: 64.8, hip: 149.9 }, 'in');
 		expect(ask?.message).toBe('Please check your hip: 59″ over a 25⅝″ waist');
 		expect(ask?.suggestion).toBeNull();
 	});

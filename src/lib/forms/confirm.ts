@@ -2,9 +2,8 @@
 // for 105) or of the tape. The engine says which figure and its limit (a confirmable FieldProblem); this
 // offers the likely intended number, in the shopper's units, and otherwise the limit in words.
 // Our own small heuristic (no library guesses typing slips): digits swapped, one digit dropped or doubled.
-import type { FieldProblem } from '../drafting/errors';
+import { problemIn, type FieldProblem } from '../drafting/errors';
 import { inToCm } from '../drafting/units';
-import { inUnits } from './units';
 
 /** What the shop shows for a figure the engine asks to confirm. */
 export interface ConfirmAsk {
@@ -63,5 +62,5 @@ export function confirmAsk(problems: FieldProblem[], typed: { waist: number; hip
 	const least = field === 'hip' ? Math.max(70, cm.waist) : 50;
 	const usual = field === 'hip' ? cm.waist + 25 : cm.hip - 15;
 	const suggestion = likelyFigure(typed[field], units, (v) => v >= least && v <= limit, usual);
-	return { field, message: inUnits(p.message, units), value: typed[field], suggestion };
+	return { field, message: problemIn(p, units), value: typed[field], suggestion };
 }

@@ -48,20 +48,20 @@ export const FIT_STEPS: { field: FitField; label: string; limits: { min: number;
 	{ field: 'easeHip', label: 'Your hip ease', limits: FIT_LIMITS['ease.hip'], how: 'More room round the hip than we usually give, or less (a minus figure), all the way round.' }
 ];
 
-/** The form's fields as the engine's adjustments in cm (undefined for none). */
-export function fitFromForm(f: FitForm, units: 'cm' | 'in'): FitAdjustments | undefined {
-	return adjustmentsToCm(
-		{
-			hollowBack: f.hollowBack,
-			roundedAbdomen: f.roundedAbdomen,
-			prominentSeat: f.prominentSeat,
-			highHip: f.highHip,
-			oneHip: f.oneHipSide ? { side: f.oneHipSide, higher: f.oneHipHigher, fuller: f.oneHipFuller } : null,
-			ease: { waist: f.easeWaist, hip: f.easeHip }
-		},
-		units
-	);
+/** The form's fields nested as the skirt request has them, in the form's units. */
+export function adjustmentsOfForm(f: FitForm) {
+	return {
+		hollowBack: f.hollowBack,
+		roundedAbdomen: f.roundedAbdomen,
+		prominentSeat: f.prominentSeat,
+		highHip: f.highHip,
+		oneHip: f.oneHipSide ? { side: f.oneHipSide, higher: f.oneHipHigher, fuller: f.oneHipFuller } : null,
+		ease: { waist: f.easeWaist, hip: f.easeHip }
+	};
 }
+
+/** The form's fields as the engine's adjustments in cm (undefined for none). */
+export const fitFromForm = (f: FitForm, units: 'cm' | 'in'): FitAdjustments | undefined => adjustmentsToCm(adjustmentsOfForm(f), units);
 
 /** Whether the form gives a higher or fuller hip without saying which side (the engine cannot tell). */
 export const sideMissing = (f: FitForm) => !f.oneHipSide && Boolean(f.oneHipHigher || f.oneHipFuller);

@@ -1,10 +1,9 @@
 // The measuring-and-configuring form as flat fields, so it works as a plain HTML form without
-// JavaScript and with superforms' client validation alike. It becomes a bag item on the server.
+// JavaScript and with superforms' client validation alike. It becomes the skirt request (quote.ts):
+// sent for her price from the browser, kept as a bag item on the server.
 import { z } from 'zod';
-import { toCm, UNITS, type BagItem } from './quote';
-import { inUnits } from './units';
-import { validateMeasurements } from '../drafting/measurements';
-import { FIT_FIELD_OF, fitFields, fitFromForm, sideMissing } from './fit';
+import { bagItemOf, measurementProblems, toCm, UNITS, type BagItem, type QuoteRequest, type ShopOptions } from './quote';
+import { adjustmentsOfForm, FIT_FIELD_OF, fitFields, sideMissing } from './fit';
 import { FIGURE_SOURCES } from '../drafting/figures-source';
 
 // Empty until the shopper types (null), so the form never shows a made-up 0.
@@ -50,11 +49,12 @@ export const makeFormSchema = z
 			const message = k === 'waistToHip' ? 'Enter your waist-to-hip depth, or tick "I don’t know it".' : `Enter your ${LABELS[k]}.`;
 			ctx.addIssue({ code: 'custom', path: [k], message });
 		}
-		const cm = { ...cmOf(f), adjustments: fitFromForm(f, f.units) };
-		// A figure she may confirm is not an error of the form: the engine asks "did you mean …?" for it.
-		for (const p of validateMeasurements(cm)) {
+		// The same check as the skirt request's, on the request this form becomes; each problem back on its
+		// flat field. A figure she may confirm is not an error of the form: the engine asks "did you mean …?".
+		const q = skirtRequestOf('', f);
+		for (const p of measurementProblems(toCm(q.measurements, q.units), q.units)) {
 			const field = FIT_FIELD_OF[p.field] ?? p.field;
-			if (!p.confirmable && !(missing as string[]).includes(field)) ctx.addIssue({ code: 'custom', path: [field], message: inUnits(p.message, f.units) });
+			if (!(missing as string[]).includes(field)) ctx.addIssue({ code: 'custom', path: [field], message: p.message });
 		}
 		if (sideMissing(f)) ctx.addIssue({ code: 'custom', path: ['oneHipSide'], message: 'Say which hip is higher or fuller: left or right.' });
 		if (f.saveCard && !f.cardName) ctx.addIssue({ code: 'custom', path: ['cardName'], message: 'Give your measure card a name, such as "Everyday".' });
@@ -63,44 +63,39 @@ export const makeFormSchema = z
 
 export type MakeForm = z.infer<typeof makeFormSchema>;
 
-/** The form's measurements in cm as the engine takes them (an empty girth is NaN, which the checks name). */
-function cmOf(f: MakeForm) {
-	return toCm(
-		{
+/** The form's options as the skirt request nests them. */
+export const optionsOfForm = (f: MakeForm): ShopOptions => ({
+	waistband: f.waistband,
+	closure: { kind: f.closureKind, position: f.closurePosition },
+	lining: f.lining,
+	pockets: f.pockets,
+	vent: f.vent,
+	...(f.hemDepth !== undefined ? { hemDepth: f.hemDepth } : {})
+});
+
+/**
+ * The one conversion from the flat form to the skirt request (what /api/quote takes, in her units): the
+ * configure page sends it for her price, and the add-to-bag action keeps it. An empty girth is NaN, which
+ * the checks name.
+ */
+export function skirtRequestOf(style: string, f: MakeForm): QuoteRequest {
+	return {
+		style,
+		units: f.units,
+		fabricId: f.fabricId || undefined,
+		figuresSource: f.figuresSource,
+		measurements: {
 			waist: f.waist ?? NaN,
 			hip: f.hip ?? NaN,
 			length: f.length ?? NaN,
 			waistToHip: f.unknownDepth ? null : (f.waistToHip ?? NaN),
 			waistToKnee: f.waistToKnee,
-			confirmed: f.confirmed
+			confirmed: f.confirmed,
+			adjustments: adjustmentsOfForm(f)
 		},
-		f.units
-	);
-}
-
-/** Measurements in cm with the adjustments, as the bag keeps them. */
-export function measurementsOf(f: MakeForm) {
-	const m = cmOf(f);
-	const adjustments = fitFromForm(f, f.units);
-	return adjustments ? { ...m, adjustments } : m;
-}
-
-export function bagItemFrom(style: string, f: MakeForm): BagItem {
-	return {
-		id: crypto.randomUUID().slice(0, 12),
-		style,
-		fabricId: f.fabricId,
-		units: f.units,
-		figuresSource: f.figuresSource,
-		// Only called on a valid form, where every measurement is a number.
-		measurements: measurementsOf(f),
-		options: {
-			waistband: f.waistband,
-			closure: { kind: f.closureKind, position: f.closurePosition },
-			lining: f.lining,
-			pockets: f.pockets,
-			vent: f.vent,
-			...(f.hemDepth !== undefined ? { hemDepth: f.hemDepth } : {})
-		}
+		options: optionsOfForm(f)
 	};
 }
+
+/** A valid form as a bag item (every measurement a number, a fabric chosen). */
+export const bagItemFrom = (style: string, f: MakeForm): BagItem => bagItemOf({ ...skirtRequestOf(style, f), fabricId: f.fabricId }, crypto.randomUUID().slice(0, 12));

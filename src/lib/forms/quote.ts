@@ -2,9 +2,9 @@
 // the form actions and the /api/quote endpoint, so all three refuse the same things in the same words.
 import { z } from 'zod';
 import { validateMeasurements } from '../drafting/measurements';
+import { problemIn } from '../drafting/errors';
 import type { FitAdjustments } from '../drafting/fit';
 import { inToCm } from '../drafting/units';
-import { inUnits } from './units';
 import { FIGURE_SOURCES } from '../drafting/figures-source';
 
 export const UNITS = ['cm', 'in'] as const;
@@ -103,10 +103,15 @@ export const optionsSchema = z
 
 export type ShopOptions = z.infer<typeof optionsSchema>;
 
-/** Checks the measurements against the engine's own ranges, with the messages in the shopper's units. A
- * figure she may confirm is left to the engine, which answers with its value and limit ("did you mean …?"). */
-function checkRanges(m: MeasurementsCm, ctx: z.RefinementCtx, units: (typeof UNITS)[number], path: string[]) {
-	for (const p of validateMeasurements(m)) if (!p.confirmable) ctx.addIssue({ code: 'custom', message: inUnits(p.message, units), path: [...path, ...p.field.split('.')] });
+/**
+ * The one check of her measurements, behind the API, the configure form and the measure card: the engine's
+ * own ranges, each message in her units. A figure she may confirm is left to the engine, which answers with
+ * its value and limit ("did you mean …?").
+ */
+export function measurementProblems(m: MeasurementsCm, units: (typeof UNITS)[number]): { field: string; message: string }[] {
+	return validateMeasurements(m)
+		.filter((p) => !p.confirmable)
+		.map((p) => ({ field: p.field, message: problemIn(p, units) }));
 }
 
 export const quoteSchema = z
@@ -118,9 +123,17 @@ export const quoteSchema = z
 		units: z.enum(UNITS).default('cm'),
 		figuresSource: z.enum(FIGURE_SOURCES).default('measured')
 	})
-	.superRefine((q, ctx) => checkRanges(toCm(q.measurements, q.units), ctx, q.units, ['measurements']));
+	.superRefine((q, ctx) => {
+		for (const p of measurementProblems(toCm(q.measurements, q.units), q.units)) ctx.addIssue({ code: 'custom', message: p.message, path: ['measurements', ...p.field.split('.')] });
+	});
 
+/** The skirt request: what /api/quote and /api/orders take, and what the configure form becomes. */
 export type QuoteRequest = z.infer<typeof quoteSchema>;
+
+/** The request in centimetres, as the quote, the bag and the order line take it. */
+export function requestInCm(q: QuoteRequest) {
+	return { style: q.style, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource, options: q.options, measurements: toCm(q.measurements, q.units) };
+}
 
 /** A configured skirt in the bag: always stored in centimetres. */
 export const bagItemSchema = z.object({
@@ -144,3 +157,6 @@ export const bagItemSchema = z.object({
 });
 
 export type BagItem = z.infer<typeof bagItemSchema>;
+
+/** A request with its fabric chosen, as a bag item. */
+export const bagItemOf = (q: QuoteRequest & { fabricId: number }, id: string): BagItem => ({ id, ...requestInCm(q), fabricId: q.fabricId });

@@ -8,7 +8,7 @@ import { orderApiSchema } from '$lib/forms/order-api';
 import { quoteSchema } from '$lib/forms/quote';
 import { stageSchema } from '$lib/forms/stage';
 import { rulesPreviewSchema } from '../house/rules-preview';
-import * as answers from './answers';
+import * as answers from '$lib/api/answers';
 import * as examples from './examples';
 import type { Example } from './examples';
 

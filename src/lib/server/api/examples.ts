@@ -5,7 +5,7 @@
 import { DEFAULT_RULES, draftSkirt } from '$lib/drafting';
 import { SAMPLE_FIGURE } from '../quote/sample';
 import { DEMO_STYLES } from '../seed/catalogue';
-import type { FailureAnswer, PlacedOrderAnswer, QueueAnswer, QuoteAnswer, RulesPreviewAnswer, ShopperOrderAnswer, StageMovedAnswer, SummaryAnswer, WebhookAnswer } from './answers';
+import type { FailureAnswer, PlacedOrderAnswer, QueueAnswer, QuoteAnswer, RulesPreviewAnswer, ShopperOrderAnswer, StageMovedAnswer, SummaryAnswer, WebhookAnswer } from '$lib/api/answers';
 
 export type Example = {
 	summary: string;

@@ -14,3 +14,6 @@ export async function styleBySlug(db: Db, slug: string) {
 export function listFabrics(db: Db) {
 	return db.select().from(fabrics).where(isNull(fabrics.retiredAt)).orderBy(asc(fabrics.name));
 }
+
+/** Every style's name and kind, retired ones too (reports and orders may name a retired style). */
+export const styleKinds = (db: Db) => db.select({ name: styles.name, kind: styles.kind }).from(styles);

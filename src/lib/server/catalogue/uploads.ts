@@ -1,13 +1,13 @@
 // Swatch photos the owner uploads for a fabric. The file's name and declared type are the
 // visitor's word only: the bytes decide what it is, and only a PNG, JPEG or WebP photo is kept,
-// re-drawn by sharp as a WebP of at most 800 × 800 (which also drops EXIF data such as GPS).
-import sharp from 'sharp';
+// re-drawn by sharp as a WebP of at most 800 × 800 (which also drops EXIF data such as GPS): pictures.ts.
 import { and, eq } from 'drizzle-orm';
 import { db } from '../db';
 import type { Db } from '../db/client';
 import { uploads } from '../db/schema';
 import { deleteUpload, readUpload, saveUpload } from './storage';
 import { failure, type Failure } from '$lib/failure';
+import { megabytes, preparePicture, type PictureRules, type PreparedPicture } from '../pictures';
 
 export const SWATCH_LIMITS = {
 	bytes: 5 * 1024 * 1024,
@@ -16,67 +16,18 @@ export const SWATCH_LIMITS = {
 	pixels: 40_000_000
 } as const;
 
-const ACCEPTED: Record<string, string> = { png: 'PNG', jpeg: 'JPEG', webp: 'WebP' };
-const NAMES: Record<string, string> = {
-	gif: 'a GIF',
-	svg: 'an SVG drawing',
-	tiff: 'a TIFF',
-	heif: 'a HEIF/HEIC photo',
-	avif: 'an AVIF',
-	pdf: 'a PDF',
-	jp2: 'a JPEG 2000'
-};
-const USE = 'Use a PNG, JPEG or WebP photo.';
-
 /** A refused file: 400, or 413 when it is too large. */
 export type Refusal = Failure;
-export type PreparedSwatch = { ok: true; bytes: Uint8Array; width: number; height: number; from: string };
-
-const mb = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB`;
-
-/** Decides by content whether the bytes are a photo we take, and re-encodes them. Stores nothing. */
-export async function prepareSwatch(input: Uint8Array): Promise<PreparedSwatch | Refusal> {
-	if (input.byteLength === 0) return failure(400, `The file is empty. ${USE}`);
-	if (input.byteLength > SWATCH_LIMITS.bytes) return failure(413, tooLarge(input.byteLength));
-	let format: string | undefined;
-	let pixels = 0;
-	try {
-		const meta = await sharp(input).metadata();
-		format = meta.format;
-		pixels = (meta.width ?? 0) * (meta.height ?? 0);
-	} catch {
-		return failure(400, `This file is not a picture we can read, whatever its name says. ${USE}`);
-	}
-	if (!format || !ACCEPTED[format]) {
-		const what = (format && NAMES[format]) ?? (format ? `a ${format.toUpperCase()} file` : 'not a photo');
-		return failure(400, `This file is ${what} inside, whatever its name says. ${USE}`);
-	}
-	if (pixels > SWATCH_LIMITS.pixels)
-		return {
-			ok: false,
-			status: 400,
-			message: `This picture is ${Math.round(pixels / 1e6)} megapixels: at most ${SWATCH_LIMITS.pixels / 1e6} are taken. Save it smaller and try again.`
-		};
-	try {
-		const { data, info } = await sharp(input, { limitInputPixels: SWATCH_LIMITS.pixels })
-			// Turn the photo upright first: the orientation tag goes with the rest of the metadata.
-			.rotate()
-			.resize(SWATCH_LIMITS.side, SWATCH_LIMITS.side, { fit: 'inside', withoutEnlargement: true })
-			.webp({ quality: 82 })
-			.toBuffer({ resolveWithObject: true });
-		return { ok: true, bytes: new Uint8Array(data), width: info.width, height: info.height, from: ACCEPTED[format] };
-	} catch {
-		return {
-			ok: false,
-			status: 400,
-			message: `This ${ACCEPTED[format]} file seems damaged: we could not read the picture in it. Save it again and retry.`
-		};
-	}
-}
+export type PreparedSwatch = PreparedPicture;
 
 export function tooLarge(bytes: number) {
-	return `This photo is ${mb(bytes)}: the limit is 5 MB. Save it smaller (${SWATCH_LIMITS.side} pixels a side is plenty for a swatch) and try again.`;
+	return `This photo is ${megabytes(bytes)}: the limit is 5 MB. Save it smaller (${SWATCH_LIMITS.side} pixels a side is plenty for a swatch) and try again.`;
 }
+
+const SWATCH_RULES: PictureRules = { ...SWATCH_LIMITS, accepted: { png: 'PNG', jpeg: 'JPEG', webp: 'WebP' }, use: 'Use a PNG, JPEG or WebP photo.', tooLarge, encode: 'webp' };
+
+/** Decides by content whether the bytes are a photo we take, and re-encodes them as WebP. Stores nothing. */
+export const prepareSwatch = (input: Uint8Array): Promise<PreparedSwatch | Refusal> => preparePicture(input, SWATCH_RULES);
 
 export type AcceptedSwatch = {
 	ok: true;

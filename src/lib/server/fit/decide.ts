@@ -120,6 +120,7 @@ export async function decideReport(db: Db, d: Decision): Promise<DecideResult> {
 			const [locked] = await tx.select().from(orders).where(eq(orders.id, rootOf(order))).for('update');
 			await lockReport(tx, d.reportId);
 			const used = await remakesUsed(tx, locked.id);
+			if (settings.freeRemakesPerOrder === 0) throw new Refused(409, 'The shop offers no free remakes (back office, Settings): choose an alteration, or decline with a reason.');
 			if (used >= settings.freeRemakesPerOrder) {
 				throw new Refused(409, `Order ${locked.number} has had its free remake${settings.freeRemakesPerOrder === 1 ? '' : 's'} already (${used} of ${settings.freeRemakesPerOrder}). Choose an alteration, or decline with a reason.`);
 			}

@@ -3,7 +3,8 @@
 // (the workroom reads drag lines from them), take 10 MB, may be HEIF where this build of libvips reads
 // it, are never public, and carry no metadata at all: sharp writes none unless asked (no EXIF, no GPS,
 // no ICC profile, no XMP), which the integration test checks with exiftool.
-import sharp from 'sharp';
+import { megabytes, preparePicture, type PictureRules, type PreparedPicture } from '../pictures';
+import type { Failure } from '$lib/failure';
 import { randomBytes } from 'node:crypto';
 import { and, asc, eq, lt } from 'drizzle-orm';
 import type { Db } from '../db/client';
@@ -12,51 +13,16 @@ import { deleteUpload, readUpload, saveUpload } from '../catalogue/storage';
 
 export const PHOTO_LIMITS = { bytes: 10 * 1024 * 1024, side: 1600, pixels: 50_000_000, perReport: 4 } as const;
 
-const ACCEPTED: Record<string, string> = { png: 'PNG', jpeg: 'JPEG', webp: 'WebP', heif: 'HEIF' };
-const NAMES: Record<string, string> = { gif: 'a GIF', svg: 'an SVG drawing', tiff: 'a TIFF', pdf: 'a PDF', jp2: 'a JPEG 2000' };
-const USE = 'Use a JPEG, PNG or WebP photo.';
-const mb = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB`;
-
-export type PhotoRefusal = { ok: false; message: string };
-export type PreparedPhoto = { ok: true; bytes: Uint8Array; width: number; height: number };
+export type PreparedPhoto = PreparedPicture;
 
 export function photoTooLarge(bytes: number) {
-	return `This photo is ${mb(bytes)}: the limit is 10 MB. Save it smaller and try again.`;
+	return `This photo is ${megabytes(bytes)}: the limit is 10 MB. Save it smaller and try again.`;
 }
 
+const PHOTO_RULES: PictureRules = { ...PHOTO_LIMITS, accepted: { png: 'PNG', jpeg: 'JPEG', webp: 'WebP', heif: 'HEIF' }, use: 'Use a JPEG, PNG or WebP photo.', tooLarge: photoTooLarge, encode: 'jpeg', heicHint: true };
+
 /** Decides by content whether the bytes are a photo we take and re-encodes them as a bare JPEG. */
-export async function preparePhoto(input: Uint8Array): Promise<PreparedPhoto | PhotoRefusal> {
-	if (input.byteLength === 0) return { ok: false, message: `The file is empty. ${USE}` };
-	if (input.byteLength > PHOTO_LIMITS.bytes) return { ok: false, message: photoTooLarge(input.byteLength) };
-	let format: string | undefined;
-	let pixels = 0;
-	try {
-		const meta = await sharp(input).metadata();
-		format = meta.format;
-		pixels = (meta.width ?? 0) * (meta.height ?? 0);
-	} catch {
-		// An iPhone HEIC is HEVC inside: this build of libvips reads HEIF only with AV1 inside.
-		const heic = input.byteLength > 12 && Buffer.from(input.subarray(4, 12)).toString('latin1').startsWith('ftyphei');
-		if (heic) return { ok: false, message: `We cannot read this HEIC photo here. On an iPhone choose Settings → Camera → Formats → Most Compatible, or share it as JPEG. ${USE}` };
-		return { ok: false, message: `This file is not a picture we can read, whatever its name says. ${USE}` };
-	}
-	if (!format || !ACCEPTED[format]) {
-		const what = (format && NAMES[format]) ?? (format ? `a ${format.toUpperCase()} file` : 'not a photo');
-		return { ok: false, message: `This file is ${what} inside, whatever its name says. ${USE}` };
-	}
-	// A small file can unpack into a huge picture: refuse before decoding it.
-	if (pixels > PHOTO_LIMITS.pixels) return { ok: false, message: `This picture is ${Math.round(pixels / 1e6)} megapixels: at most ${PHOTO_LIMITS.pixels / 1e6} are taken. Save it smaller and try again.` };
-	try {
-		const { data, info } = await sharp(input, { limitInputPixels: PHOTO_LIMITS.pixels })
-			.rotate() // upright first: the orientation tag goes with the rest of the metadata
-			.resize(PHOTO_LIMITS.side, PHOTO_LIMITS.side, { fit: 'inside', withoutEnlargement: true })
-			.jpeg({ quality: 85, mozjpeg: true })
-			.toBuffer({ resolveWithObject: true });
-		return { ok: true, bytes: new Uint8Array(data), width: info.width, height: info.height };
-	} catch {
-		return { ok: false, message: `This ${ACCEPTED[format]} file seems damaged: we could not read the picture in it. Save it again and retry.` };
-	}
-}
+export const preparePhoto = (input: Uint8Array): Promise<PreparedPhoto | Failure> => preparePicture(input, PHOTO_RULES);
 
 /** A random id of 256 bits: a photo's address cannot be guessed, and it is checked on every request too. */
 const publicId = () => randomBytes(32).toString('base64url');

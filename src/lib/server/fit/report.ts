@@ -57,6 +57,28 @@ export function fitWindow(order: Pick<OrderRow, 'status'>, delivered: Date | nul
 	return { open: true, closes };
 }
 
+/** Whether her order page offers "Tell us how it fits": its window, read from the shop's settings. */
+export async function fitOffer(db: Db, order: Pick<OrderRow, 'id' | 'status'>, now = new Date()) {
+	const [settings, delivered] = await Promise.all([shopSettingsOf(db), deliveredAt(db, order.id)]);
+	const window = fitWindow(order, delivered, settings.remakeWindowDays, now);
+	return window.open ? { closes: window.closes.toISOString() } : null;
+}
+
+/**
+ * What her order page says of the fit loop: a report already sent, or "Tell us how it fits" while the
+ * window is open (until `closes`), and the order this one remakes.
+ */
+export async function fitStateOfOrder(db: Db, number: string, now = new Date()) {
+	const [row] = await db.select({ id: orders.id, status: orders.status, remakeOfId: orders.remakeOfId }).from(orders).where(eq(orders.number, number));
+	if (!row) return null;
+	const [[first], [report]] = await Promise.all([
+		row.remakeOfId ? db.select({ number: orders.number }).from(orders).where(eq(orders.id, row.remakeOfId)) : Promise.resolve([]),
+		db.select({ id: fitReports.id }).from(fitReports).where(eq(fitReports.orderId, row.id)).limit(1)
+	]);
+	const offer = report ? null : await fitOffer(db, row, now);
+	return { fit: report ? ('sent' as const) : offer ? ('open' as const) : null, closes: offer?.closes ?? null, remakeOf: first?.number ?? null };
+}
+
 /** Everything her fit page shows: the skirts of the order, each with its report if she made one. */
 export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 	const settings = await shopSettingsOf(db);
@@ -72,6 +94,8 @@ export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 		db.select().from(fitReports).where(eq(fitReports.orderId, order.id))
 	]);
 	const window = fitWindow(order, delivered, settings.remakeWindowDays, now);
+	const remakeIds = reports.map((r) => r.remakeOrderId).filter((id): id is number => id !== null);
+	const remakes = remakeIds.length ? await db.select({ id: orders.id, number: orders.number, promisedDate: orders.promisedDate }).from(orders).where(inArray(orders.id, remakeIds)) : [];
 	const withPhotos = await Promise.all(
 		reports.map(async (r) => ({
 			id: r.id,
@@ -85,11 +109,12 @@ export async function fitPageData(db: Db, order: OrderRow, now = new Date()) {
 			decision: r.decision,
 			reason: r.reason,
 			corrections: r.corrections,
+			remake: remakes.find((o) => o.id === r.remakeOrderId) ?? null,
 			createdAt: r.createdAt.toISOString(),
 			photos: (await photosOf(db, r.id)).map((p) => ({ id: p.id, width: p.width, height: p.height }))
 		}))
 	);
-	return { window: window.open ? { open: true as const, closes: window.closes.toISOString() } : window, lines, reports: withPhotos, photoRetentionDays: settings.photoRetentionDays };
+	return { window: window.open ? { open: true as const, closes: window.closes.toISOString() } : window, lines, reports: withPhotos, photoRetentionDays: settings.photoRetentionDays, freeRemakesPerOrder: settings.freeRemakesPerOrder };
 }
 
 export type ReportInput = {
@@ -164,7 +189,7 @@ export async function submitReport(db: Db, orderId: number, input: ReportInput, 
 			.insert(fitReports)
 			.values({ orderId: order.id, orderLineId: line.id, answers: input.answers, marks: input.marks, note: input.note, wish: input.wish, units: input.units })
 			.$returningId();
-		const mailId = await enqueueMail(tx, { to: order.email, orderId: order.id, ...reportReceivedMail({ number: order.number, shopperName: order.shopperName, link, wish: input.wish }) });
+		const mailId = await enqueueMail(tx, { to: order.email, orderId: order.id, ...reportReceivedMail({ number: order.number, shopperName: order.shopperName, link, wish: input.wish, photoRetentionDays: settings.photoRetentionDays }) });
 		return { ok: true as const, reportId: id, mailIds: [mailId] };
 	});
 	if (!result.ok) return result;

@@ -1,7 +1,7 @@
 // The workroom's side of the fit loop: who may decide, the list of reports, and one report beside the
 // figures of the skirt as it was first drafted.
 import { error } from '@sveltejs/kit';
-import { desc, eq, sql } from 'drizzle-orm';
+import { count, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, fitReports, orderLines, orders, styles, users } from '../db/schema';
 import { requireRole, STAFF } from '../access';
@@ -9,6 +9,7 @@ import { shopSettingsOf } from '../house/rules';
 import { cardFor } from './card';
 import { photosOf, purgeExpiredPhotos } from './photos';
 import { remakesUsed } from './decide';
+import { firstName } from '../../orders/names';
 
 type Event = Parameters<typeof requireRole>[0];
 
@@ -18,10 +19,22 @@ type Event = Parameters<typeof requireRole>[0];
  */
 export async function requireFitDecider(db: Db, event: Event) {
 	const user = requireRole(event, STAFF);
-	if (user.role === 'owner') return user;
-	const [row] = await db.select({ leave: users.fitDecider }).from(users).where(eq(users.id, user.id));
-	if (!row?.leave) error(403, 'Fit reports are for the owner and the cutters she allows. Ask her for leave on the Staff page.');
+	if (!(await hasFitLeave(db, user))) error(403, 'Fit reports are for the owner and the cutters she allows. Ask her for leave on the Staff page.');
 	return user;
+}
+
+/** Whether this person may open fit reports and their photos: the owner, or a cutter she allows. */
+export async function hasFitLeave(db: Db, user: { id: string; role: string }): Promise<boolean> {
+	if (user.role === 'owner') return true;
+	if (user.role !== 'cutter') return false;
+	const [row] = await db.select({ leave: users.fitDecider }).from(users).where(eq(users.id, user.id));
+	return Boolean(row?.leave);
+}
+
+/** Reports nobody has opened yet (the workroom menu's count). */
+export async function newReportCount(db: Db): Promise<number> {
+	const [row] = await db.select({ n: count() }).from(fitReports).where(eq(fitReports.status, 'new'));
+	return Number(row?.n ?? 0);
 }
 
 export async function fitReportList(db: Db) {
@@ -34,7 +47,7 @@ export async function fitReportList(db: Db) {
 		.orderBy(sql`FIELD(${fitReports.status}, 'new', 'waiting', 'decided')`, desc(fitReports.createdAt))
 		.limit(300);
 	// The workroom sees a first name, as on its other pages.
-	return rows.map((r) => ({ ...r, shopperName: r.shopperName.trim().split(/\s+/)[0], at: r.at.toISOString() }));
+	return rows.map((r) => ({ ...r, shopperName: firstName(r.shopperName), at: r.at.toISOString() }));
 }
 
 export async function fitReportForStaff(db: Db, id: number) {
@@ -67,14 +80,4 @@ export async function fitReportForStaff(db: Db, id: number) {
 		freeRemakesLeft: Math.max(0, settings.freeRemakesPerOrder - used),
 		remake: remake[0] ?? null
 	};
-}
-
-/** For a remake's ticket and workroom page: what changed against the first cut, and why. */
-export async function remakeChanges(db: Db, orderId: number) {
-	const [row] = await db
-		.select({ corrections: fitReports.corrections, reason: fitReports.reason, firstNumber: orders.number })
-		.from(fitReports)
-		.innerJoin(orders, eq(orders.id, fitReports.orderId))
-		.where(eq(fitReports.remakeOrderId, orderId));
-	return row ? { firstNumber: row.firstNumber, reason: row.reason ?? '', corrections: row.corrections ?? [] } : null;
 }

@@ -1,6 +1,6 @@
-import { eq, inArray, max } from 'drizzle-orm';
+import { desc, eq, inArray, max } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { houseRules, shopSettings } from '../db/schema';
+import { houseRules, shopSettings, users } from '../db/schema';
 import { resolveRules, type HouseRules } from '$lib/drafting/rules';
 import { DEFAULT_SHIPPING, type ShippingRule } from '$lib/pricing';
 
@@ -15,6 +15,21 @@ export async function currentRules(db: Db): Promise<{ id: number; rules: HouseRu
 	if (!id) throw new Error('No house rules: run the seed (npm start does).');
 	return { id, rules: await rulesVersion(db, id) };
 }
+
+/** A new version of the rules (already checked and resolved); placed orders keep the version they name. */
+export async function saveRulesVersion(db: Db, rules: HouseRules, note: string, by: string): Promise<number> {
+	const [{ id }] = await db.insert(houseRules).values({ rules, note, createdBy: by }).$returningId();
+	return id;
+}
+
+/** The newest versions with their notes and who saved them, as the back office lists them. */
+export const rulesVersions = (db: Db, limit = 20) =>
+	db
+		.select({ id: houseRules.id, note: houseRules.note, createdAt: houseRules.createdAt, by: users.name })
+		.from(houseRules)
+		.leftJoin(users, eq(users.id, houseRules.createdBy))
+		.orderBy(desc(houseRules.id))
+		.limit(limit);
 
 /** One version of the rules, as an order that was drafted with it needs them. */
 export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
@@ -34,10 +49,10 @@ export type ShopSettings = {
 	units: 'cm' | 'in';
 	shipping: ShippingRule;
 	ordersPerDay: number;
-	remakePolicy: string;
 	/** The workroom plotter's roll width (cm), the default width of a full-size pattern on a roll. */
 	plotterWidthCm: number;
-	/** Days after delivery within which she may report how it fits. */
+	/** Days after delivery within which she may report how it fits. The remake promise's words are built
+	 * from this and freeRemakesPerOrder (fit/promise.ts), so the words and the rule cannot disagree. */
 	remakeWindowDays: number;
 	/** Days her fit photos are kept before they are deleted on their own. */
 	photoRetentionDays: number;
@@ -53,7 +68,6 @@ const DEFAULTS: ShopSettings = {
 	ordersPerDay: 4,
 	// A 36 in roll, the common plotter width (91.4 cm).
 	plotterWidthCm: 91.4,
-	remakePolicy: 'If your skirt does not fit as drafted, tell us within 30 days of delivery and we alter it or cut it again.',
 	remakeWindowDays: 30,
 	photoRetentionDays: 90,
 	freeRemakesPerOrder: 1
@@ -64,10 +78,22 @@ const DEFAULTS: ShopSettings = {
 const SETTINGS_TTL_MS = 5_000;
 let cachedSettings: { at: number; value: ShopSettings } | null = null;
 
-export async function shopSettingsOf(db: Db, fresh = false): Promise<ShopSettings> {
+export async function shopSettingsOf(db: Pick<Db, 'select'>, fresh = false): Promise<ShopSettings> {
 	if (!fresh && cachedSettings && Date.now() - cachedSettings.at < SETTINGS_TTL_MS) return cachedSettings.value;
 	const rows = await db.select().from(shopSettings).where(inArray(shopSettings.key, Object.keys(DEFAULTS)));
 	const value = { ...DEFAULTS, ...Object.fromEntries(rows.map((r) => [r.key, r.value])) } as ShopSettings;
 	cachedSettings = { at: Date.now(), value };
 	return value;
+}
+
+/** Writes settings (one row each, in one transaction) and drops this server's cached copy, so the next
+ * page it serves reads them; other app servers see them within SETTINGS_TTL_MS. */
+export async function saveShopSettings(db: Db, values: Partial<ShopSettings>) {
+	await db.transaction(async (tx) => {
+		for (const [key, value] of Object.entries(values)) {
+			if (value === undefined) continue;
+			await tx.insert(shopSettings).values({ key, value }).onDuplicateKeyUpdate({ set: { value } });
+		}
+	});
+	cachedSettings = null;
 }

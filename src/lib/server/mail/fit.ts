@@ -1,5 +1,6 @@
 // The fit loop's mails, in the words of its pages ("Tell us how it fits", "Remake", "Alteration").
 import { layout } from './templates';
+import { ANSWER_TIME, REPORT_RECEIVED, cardWords, decisionLead, photoWords, remakeOfWords, sentWords, wishWords } from '../../fit/words';
 
 const firstName = (name: string) => name.trim().split(/\s+/)[0] ?? name;
 
@@ -8,17 +9,8 @@ function fitMail(subject: string, name: string, paragraphs: string[], link: stri
 	return { subject, text: `${all.join('\n\n')}\n\n${label}: ${link}\n`, html: layout(subject, all, { href: link, label }) };
 }
 
-export function reportReceivedMail(o: { number: string; shopperName: string; link: string; wish: 'alteration' | 'remake' }) {
-	return fitMail(
-		`We have your fit report for order ${o.number}`,
-		o.shopperName,
-		[
-			`Thank you for telling us how it fits. The atelier reads every report and decides with you: an alteration, a remake, or an explanation. You asked for ${o.wish === 'remake' ? 'a remake' : 'an alteration'}.`,
-			'We answer within a few working days. Your photos are seen only by you and the atelier, and you can delete them from the same page at any time.'
-		],
-		o.link,
-		'See your fit report'
-	);
+export function reportReceivedMail(o: { number: string; shopperName: string; link: string; wish: 'alteration' | 'remake'; photoRetentionDays: number }) {
+	return fitMail(`We have your fit report for order ${o.number}`, o.shopperName, [`${REPORT_RECEIVED} ${wishWords(o.wish)}`, ANSWER_TIME, photoWords(o.photoRetentionDays)], o.link, 'See your fit report');
 }
 
 export type DecisionMail = {
@@ -32,38 +24,24 @@ export type DecisionMail = {
 	promisedDate?: string;
 };
 
+const DECISION_SUBJECT = {
+	remake: (n: string) => `We are making your skirt again (order ${n})`,
+	alteration: (n: string) => `We will alter your skirt (order ${n})`,
+	decline: (n: string) => `About your fit report for order ${n}`
+} as const;
+
+/** The decision in her fit page's words: its lead, the reason she is given, the card's corrections. */
 export function decisionMail(o: DecisionMail) {
-	const changes = o.changes.length ? [`What we change on your measure card: ${o.changes.join('; ')}.`] : [];
-	if (o.decision === 'remake') {
-		return fitMail(
-			`We are making your skirt again (order ${o.number})`,
-			o.shopperName,
-			[`Remake: we cut your skirt again as order ${o.remakeNumber}, at no charge. We plan to ship it by ${o.promisedDate}.`, o.reason, ...changes, 'You may keep the first skirt.'],
-			o.link,
-			'See your fit report'
-		);
-	}
-	if (o.decision === 'alteration') {
-		return fitMail(
-			`We will alter your skirt (order ${o.number})`,
-			o.shopperName,
-			[
-				'Alteration: please send the skirt back to the atelier; we alter it and ship it to you again, at no charge. The order page shows where it is.',
-				o.reason,
-				...changes
-			],
-			o.link,
-			'See your fit report'
-		);
-	}
-	return fitMail(`About your fit report for order ${o.number}`, o.shopperName, ['We have looked at your fit report carefully and will not remake or alter this skirt.', `Why: ${o.reason}`, 'If you would like to talk it over, reply to this e-mail.'], o.link, 'See your fit report');
+	const paragraphs = [decisionLead(o), o.reason, cardWords(o.changes)].filter(Boolean);
+	if (o.decision === 'decline') paragraphs.push('If you would like to talk it over, reply to this e-mail.');
+	return fitMail(DECISION_SUBJECT[o.decision](o.number), o.shopperName, paragraphs, o.link, 'See your fit report');
 }
 
 export function remakeShippedMail(o: { number: string; remakeOf: string; shopperName: string; carrier: string; tracking: string; link: string }) {
 	return fitMail(
 		`Your remade skirt has shipped (order ${o.number})`,
 		o.shopperName,
-		[`Your remake of order ${o.remakeOf} is on its way with ${o.carrier}. Tracking number: ${o.tracking}.`, 'It is drafted with the corrections on your measure card. Tell us how it fits, the same way as before.'],
+		[`${remakeOfWords(o.remakeOf)} It has shipped. ${sentWords(o.carrier, o.tracking)}`, 'It is drafted with the corrections on your measure card. Tell us how it fits, the same way as before.'],
 		o.link,
 		`See order ${o.number}`
 	);

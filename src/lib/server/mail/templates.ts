@@ -60,9 +60,10 @@ export function orderReceivedMail(o: OrderSummary) {
 	return orderMail(`Order ${o.number} received: awaiting payment`, o, `We have your order ${o.number}. It is awaiting payment: once the payment goes through we start drafting your pattern.`);
 }
 
-export function paymentConfirmedMail(o: OrderSummary) {
+/** `promise`: the remake promise in the checkout's words (fit/promise.ts, from the shop's settings). */
+export function paymentConfirmedMail(o: OrderSummary & { promise: string }) {
 	return orderMail(`Order ${o.number} is paid`, o, `Thank you: your payment for order ${o.number} went through. Your skirt joins the cutting queue now.`, [
-		'Your skirt is made to your measurements, so the usual right to return it does not apply in many places. Our remake promise still does: if it does not fit as drafted, tell us within 30 days of delivery.'
+		`Your skirt is made to your measurements, so the usual right to return it does not apply in many places. Our remake promise still does. ${o.promise}`
 	]);
 }
 

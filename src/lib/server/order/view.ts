@@ -1,4 +1,4 @@
-import { asc, eq } from 'drizzle-orm';
+import { asc, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderEvents, orderLines, orders, styles } from '../db/schema';
 import { checkOrderToken } from './link';
@@ -66,3 +66,19 @@ export async function orderForShopper(db: Db, number: string, viewer: Viewer, to
 }
 
 export type ShopperOrder = NonNullable<Awaited<ReturnType<typeof orderForShopper>>>;
+
+/** Her own orders, newest first (at most `limit`), as her account lists them. */
+export function ordersOfShopper(db: Db, userId: string, limit?: number) {
+	const q = db
+		.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })
+		.from(orders)
+		.where(eq(orders.userId, userId))
+		.orderBy(desc(orders.createdAt));
+	return limit ? q.limit(limit) : q;
+}
+
+/** An order's id by its number, once a view has said the viewer may see it. */
+export async function orderIdOf(db: Db, number: string): Promise<number> {
+	const [row] = await db.select({ id: orders.id }).from(orders).where(eq(orders.number, number));
+	return row.id;
+}

@@ -19,7 +19,7 @@ import { rulesVersion } from '../house/rules';
 type FabricRow = { name: string; colour: string; swatchHex: string; imageUploadId: number | null };
 
 /** A fabric as the drawing's cloth: its colour, and its swatch photo when the atelier uploaded one. */
-export function clothOf(f: FabricRow, withImage = true): GarmentCloth {
+export function fillOf(f: FabricRow, withImage = true): GarmentCloth {
 	return { colour: f.swatchHex, image: withImage && f.imageUploadId ? `/uploads/${f.imageUploadId}` : null, name: `${f.name.toLowerCase()}, ${f.colour.toLowerCase()}` };
 }
 
@@ -74,7 +74,7 @@ async function draftsOfLines(db: Db, where: { orderId: number } | { orderNumber:
 /** Each line of an order (by its id or its number) as SVG markup, by line id. */
 export async function orderLineDrawings(db: Db, order: number | string): Promise<Record<number, string>> {
 	const lines = await draftsOfLines(db, typeof order === 'number' ? { orderId: order } : { orderNumber: order });
-	return Object.fromEntries(lines.map((l) => [l.id, garmentSvg(l.draft, clothOf(l.fabric), `line-${l.id}`)]));
+	return Object.fromEntries(lines.map((l) => [l.id, garmentSvg(l.draft, fillOf(l.fabric), `line-${l.id}`)]));
 }
 
 /** The Content-ID a mail names a line's drawing by. */
@@ -86,6 +86,6 @@ export async function mailImages(db: Db, html: string) {
 	if (!ids.length) return [];
 	const lines = await draftsOfLines(db, { lineIds: ids });
 	return Promise.all(
-		lines.map(async (l) => ({ cid: lineCid(l.id), filename: `skirt-${l.id}.png`, contentType: 'image/png', content: await garmentPng(l.draft, clothOf(l.fabric, false)) }))
+		lines.map(async (l) => ({ cid: lineCid(l.id), filename: `skirt-${l.id}.png`, contentType: 'image/png', content: await garmentPng(l.draft, fillOf(l.fabric, false)) }))
 	);
 }

@@ -19,6 +19,7 @@ import { orders, outputJobs, users, type OutputJobFailure } from '../db/schema';
 import { OutputProblem } from './problem';
 import { PRODUCERS } from './producers';
 import type { OutputFile } from './types';
+import { failure, type Failure } from '$lib/failure';
 
 /** The most orders one job may take (a day's cutting, with room to spare; as the ticket batch). */
 export const MAX_JOB_ORDERS = 50;
@@ -32,15 +33,15 @@ export const WORKER_ID = `${hostname().slice(0, 30)}:${process.pid}:${Math.rando
 export type NewJob = { kinds: string[]; orderIds: number[]; requestedBy: string | null };
 
 /** Reads the form's order ids and kinds, or says what is wrong with them. */
-export function parseJobRequest(ids: string[], kinds: string[]): { orderIds: number[]; kinds: string[] } | { problem: string } {
+export function parseJobRequest(ids: string[], kinds: string[]): { ok: true; orderIds: number[]; kinds: string[] } | Failure {
 	const bad = ids.filter((s) => !/^[1-9]\d{0,8}$/.test(s.trim()));
-	if (bad.length) return { problem: `These are not order ids: ${bad.slice(0, 5).map((b) => JSON.stringify(b)).join(', ')}.` };
+	if (bad.length) return failure(400, `These are not order ids: ${bad.slice(0, 5).map((b) => JSON.stringify(b)).join(', ')}.`);
 	const orderIds = [...new Set(ids.map((s) => Number(s.trim())))];
-	if (!orderIds.length) return { problem: 'Select at least one order to prepare files for.' };
-	if (orderIds.length > MAX_JOB_ORDERS) return { problem: `At most ${MAX_JOB_ORDERS} orders in one job; you selected ${orderIds.length}.` };
+	if (!orderIds.length) return failure(400, 'Select at least one order to prepare files for.');
+	if (orderIds.length > MAX_JOB_ORDERS) return failure(400, `At most ${MAX_JOB_ORDERS} orders in one job; you selected ${orderIds.length}.`);
 	const unknown = kinds.filter((k) => !Object.hasOwn(PRODUCERS, k));
-	if (unknown.length) return { problem: `Unknown kinds of file: ${unknown.slice(0, 5).join(', ')}.` };
-	return { orderIds, kinds: kinds.length ? [...new Set(kinds)] : Object.keys(PRODUCERS) };
+	if (unknown.length) return failure(400, `Unknown kinds of file: ${unknown.slice(0, 5).join(', ')}.`);
+	return { ok: true, orderIds, kinds: kinds.length ? [...new Set(kinds)] : Object.keys(PRODUCERS) };
 }
 
 /**
@@ -48,10 +49,10 @@ export function parseJobRequest(ids: string[], kinds: string[]): { orderIds: num
  * click or a resent form makes one job, not two). Orders that do not exist are refused here, before
  * any work.
  */
-export async function createJob(db: Db, job: NewJob): Promise<{ id: number } | { problem: string }> {
+export async function createJob(db: Db, job: NewJob): Promise<{ ok: true; id: number } | Failure> {
 	const found = await db.select({ id: orders.id }).from(orders).where(inArray(orders.id, job.orderIds));
 	const missing = job.orderIds.filter((id) => !found.some((f) => f.id === id));
-	if (missing.length) return { problem: missing.length === 1 ? `There is no order ${missing[0]}.` : `There are no orders ${missing.join(', ')}.` };
+	if (missing.length) return failure(404, missing.length === 1 ? `There is no order ${missing[0]}.` : `There are no orders ${missing.join(', ')}.`);
 	const same = job.requestedBy
 		? await db
 				.select({ id: outputJobs.id, kinds: outputJobs.kinds, orderIds: outputJobs.orderIds })
@@ -66,12 +67,12 @@ export async function createJob(db: Db, job: NewJob): Promise<{ id: number } | {
 		: [];
 	const key = (k: string[], o: number[]) => JSON.stringify([[...k].sort(), [...o].sort((a, b) => a - b)]);
 	const twin = same.find((s) => key(s.kinds, s.orderIds) === key(job.kinds, job.orderIds));
-	if (twin) return { id: twin.id };
+	if (twin) return { ok: true, id: twin.id };
 	const [row] = await db
 		.insert(outputJobs)
 		.values({ kinds: job.kinds, orderIds: job.orderIds, requestedBy: job.requestedBy, total: job.orderIds.length, failures: [] })
 		.$returningId();
-	return { id: row.id };
+	return { ok: true, id: row.id };
 }
 
 /** Claims the oldest queued job for this worker, or null when none waits. */

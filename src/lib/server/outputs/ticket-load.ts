@@ -4,6 +4,7 @@ import { asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, houseRules, orderLines, orders, styles } from '../db/schema';
 import { makeTicket, type Ticket } from './ticket';
+import { remakeChangesOf } from '../fit/remake-changes';
 
 /** One order's tickets, one per order line. */
 export interface OrderTickets {
@@ -64,6 +65,7 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 				)
 				.orderBy(asc(orderLines.orderId), asc(orderLines.id))
 		: [];
+	const remakes = await remakeChangesOf(db, orderRows.map((o) => o.id));
 	const byId = new Map<number, OrderTickets>();
 	for (const o of orderRows) {
 		const lines = lineRows.filter((l) => l.orderId === o.id);
@@ -92,6 +94,8 @@ export async function loadTickets(db: Db, orderIds: number[]): Promise<(OrderTic
 				fabric: l.fabric
 			})
 		);
+		// A remake's ticket says what changed against the first cut.
+		for (const t of tickets) t.remake = remakes.get(o.id) ?? null;
 		byId.set(o.id, { orderId: o.id, number: o.number, tickets });
 	}
 	return orderIds.map((id) => byId.get(id) ?? null);

@@ -18,6 +18,7 @@ import { draftInputOf, isErased, type StoredChoice, type StoredLine, type Stored
 import type { OrderStage } from '../../orders/stages';
 import type { StoredCutterLay } from '../db/schema';
 import { clothOf, cutterLayFits } from '../order/cloth';
+import type { RemakeChanges } from '../fit/remake-changes';
 
 /** The cloth as the workroom has it on the shelf. */
 export interface TicketFabric {
@@ -60,6 +61,8 @@ export interface Ticket {
 	orderedCm: number | null;
 	/** The re-drafted figures agree with those stored at order time (null when none were stored). */
 	figuresAgree: boolean | null;
+	/** For a remake: what changed against the first cut (filled in by the loader). */
+	remake?: RemakeChanges | null;
 }
 
 /** What makeTicket needs: an order line with its order, fabric and house rules. */

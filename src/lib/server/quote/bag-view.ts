@@ -1,7 +1,7 @@
 import { SOURCE_NOTE_SHOPPER } from '$lib/drafting/figures-source';
 import type { Db } from '../db/client';
 import type { BagItem } from '$lib/forms/quote';
-import { clothOf, garmentSvg } from '../outputs/garment';
+import { fillOf, garmentSvg } from '../outputs/garment';
 import { quoteBag } from './quote';
 
 /** The bag as the shopper sees it, every line priced again from the database in one quote. */
@@ -19,7 +19,7 @@ export async function viewBag(db: Db, items: BagItem[]) {
 			price: q.pricing,
 			// Figures found without a tape: the bag says where they came from.
 			warnings: item.figuresSource && item.figuresSource !== 'measured' ? [SOURCE_NOTE_SHOPPER[item.figuresSource], ...q.draft.warnings] : q.draft.warnings,
-			drawing: q.fabric ? garmentSvg(q.draft, clothOf(q.fabric), `bag-${item.id}`, item.units) : null,
+			drawing: q.fabric ? garmentSvg(q.draft, fillOf(q.fabric), `bag-${item.id}`, item.units) : null,
 			measurements: item.measurements,
 			units: item.units,
 			options: item.options,

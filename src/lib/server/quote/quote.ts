@@ -5,15 +5,15 @@
 import { and, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orders, styles } from '../db/schema';
-import { DraftInputError, draftSkirt, estimateFabric, type Draft, type HouseRules } from '$lib/drafting';
+import { DraftInputError, draftSkirt, problemIn, estimateFabric, type Draft, type HouseRules } from '$lib/drafting';
 import { failure, type Failure } from '$lib/failure';
 import type { MeasurementsCm, ShopOptions } from '$lib/forms/quote';
 import { confirmAsk } from '$lib/forms/confirm';
-import { inUnits } from '$lib/forms/units';
 import { OPEN_WORK_STAGES } from '$lib/orders/stages';
 import { priceLine, promisedShipDate, shippingCost, type LinePricing } from '$lib/pricing';
 import { currentRules, shopSettingsOf, type ShopSettings } from '../house/rules';
 import { clothOf } from '../order/cloth';
+import { remakePromise } from '$lib/fit/promise';
 import { SOURCE_NOTE_SHOPPER, type FigureSource } from '$lib/drafting/figures-source';
 
 export type QuoteInput = { measurements: MeasurementsCm; style: string; options: ShopOptions; fabricId?: number; units: 'cm' | 'in'; figuresSource?: FigureSource };
@@ -60,13 +60,13 @@ function quoteLine(ctx: QuoteContext, input: QuoteInput, style: StyleRow | undef
 		draft = draftSkirt(input.measurements, { style: style.kind, ...input.options, stretch: fabric?.stretch ?? false }, ctx.rules);
 	} catch (err) {
 		if (!(err instanceof DraftInputError)) throw err;
-		// The engine writes in cm; she reads her own units. A figure she may confirm is asked about.
+		// The engine says each problem in her units from its numbers. A figure she may confirm is asked about.
 		const fields: Record<string, string[]> = {};
-		for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(inUnits(f.message, input.units));
+		for (const f of err.fields) (fields[`measurements.${f.field}`] ??= []).push(problemIn(f, input.units));
 		const m = input.measurements;
 		const typed = (cm: number) => (input.units === 'in' ? Math.round((cm / 2.54) * 8) / 8 : cm);
 		const confirm = confirmAsk(err.fields, { waist: typed(m.waist), hip: typed(m.hip) }, m, input.units) ?? undefined;
-		return failure(400, err.fields.map((f) => inUnits(f.message, input.units)).join(' '), { fields, confirm });
+		return failure(400, err.fields.map((f) => problemIn(f, input.units)).join(' '), { fields, confirm });
 	}
 	const estimate = fabric ? estimateFabric(draft, clothOf(fabric)) : null;
 	const pricing = estimate && fabric ? priceLine({ fabricCm: estimate.length, pricePerMetre: fabric.pricePerMetre, makingPrice: style.makingPrice, options: input.options, optionPrices: style.optionPrices }) : null;
@@ -106,7 +106,7 @@ export async function quoteBag(db: Db, inputs: QuoteInput[], opts: { now?: Date 
 	const subtotal = lines.reduce((s, l) => s + (l.ok && l.pricing ? l.pricing.total : 0), 0);
 	const shipping = subtotal > 0 ? shippingCost(subtotal, ctx.settings.shipping) : 0;
 	const shipBy = lines.flatMap((l) => (l.ok ? [l.shipBy] : [])).sort().at(-1) ?? null;
-	return { rulesId: ctx.rulesId, currency: ctx.settings.currency, remakePolicy: ctx.settings.remakePolicy, lines, subtotal, shipping, total: subtotal + shipping, shipBy };
+	return { rulesId: ctx.rulesId, currency: ctx.settings.currency, remakePolicy: remakePromise(ctx.settings), lines, subtotal, shipping, total: subtotal + shipping, shipBy };
 }
 
 /**

@@ -21,8 +21,6 @@ export const DEFAULT_SETTINGS = {
 	shipping: { flat: 950, freeFrom: 30_000 },
 	ordersPerDay: 4,
 	plotterWidthCm: 91.4,
-	remakePolicy:
-		'If your skirt does not fit as drafted, tell us within 30 days of delivery: we alter it or cut it again from your corrected measurements, free of charge, once per order.',
 	remakeWindowDays: 30,
 	photoRetentionDays: 90,
 	freeRemakesPerOrder: 1

@@ -7,6 +7,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '../../drafting';
 import { renderTickets } from './pdf';
 import { makeTicket, type TicketInput } from '../outputs/ticket';
+import type { RemakeChanges } from '../fit/remake-changes';
 
 // Invented order data; the figures the ticket must print are the engine's own output for it, drafted
 // here beside the ticket (the engine's numbers are the values under test, not copied constants).
@@ -66,6 +67,20 @@ const esc = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 const rowOf = (label: string, back: number, front: number) =>
 	new RegExp(`${esc(label)}\\s+${esc(formatCm(back))}\\s+${esc(formatCm(front))}`);
 
+// A remake decided on fit report 12 of order QL-2040 (invented): four figures changed.
+const REMAKE: RemakeChanges = {
+	firstNumber: 'QL-2040',
+	reportId: 12,
+	decidedAt: '2025-06-03T10:00:00.000Z',
+	reason: 'Waist too tight and a little short on her first skirt: we let out the waist, add ease and lengthen the hem.',
+	corrections: [
+		{ field: 'waist', from: 68, to: 70 },
+		{ field: 'ease.waist', from: null, to: 0.5 },
+		{ field: 'length', from: 58.5, to: 60.5 },
+		{ field: 'hollowBack', from: 0.5, to: 1 }
+	]
+};
+
 const work = mkdtempSync(join(tmpdir(), 'ticket-spec-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
@@ -102,6 +117,20 @@ describe('cutting ticket PDF', () => {
 			`17 + ${formatCm(draft.rules.ease.waist.back).replace(' cm', '')} = ${formatCm(17 + draft.rules.ease.waist.back).replace(' cm', '')}`
 		);
 		for (const p of draft.pieces) expect(text).toContain(`${p.name} Skirt fabric ${p.cutText}`);
+	});
+
+	it('a remake lists each change against the first cut, old and new, with why and the report it came from', async () => {
+		const ticket = { ...makeTicket(input('QL-2061', { ...SIZE_12, waist: 70 }, choice)), remake: REMAKE };
+		const { text } = await parsed(await renderTickets([ticket], { paper: 'A4', origin: 'http://x' }));
+		const flat = text.replace(/\s+/g, ' ');
+		expect(flat).toContain('Remake of order QL-2040 — changes against the first cut');
+		expect(flat).toContain('Waist: first cut 68 cm, now 70 cm');
+		expect(flat).toContain('Personal waist ease: first cut none, now 0.5 cm');
+		expect(flat).toContain('Skirt length: first cut 58.5 cm, now 60.5 cm');
+		expect(flat).toContain('From fit report 12 of 3 Jun 2025. Why: Waist too tight and a little short on her first skirt');
+		// An order that is not a remake prints no such block.
+		const plain = await parsed(await renderTickets([makeTicket(input('QL-2062', SIZE_12, choice))], { paper: 'A4', origin: 'http://x' }));
+		expect(plain.text).not.toContain('changes against the first cut');
 	});
 
 	it('draws the pieces at 1:5 on A4 with a scale bar whose 10 cm measure 20 mm in the PDF', async () => {
@@ -225,20 +254,22 @@ describe('cutting ticket PDF', () => {
 	});
 
 	// What a cutter must be able to cut from, on the skirts with the most pieces and the largest ones.
-	const CASES: [string, Measurements, SkirtChoiceInput][] = [
+	const CASES: [string, Measurements, SkirtChoiceInput, RemakeChanges?][] = [
 		['straight, lined, with pockets', SIZE_12, { style: 'straight', lining: true, pockets: true }],
 		['full circle', { waist: 64, hip: 88, length: 55, waistToHip: 18 }, { style: 'full-circle' }],
 		[
 			'six gores, lined, with pockets',
 			{ waist: 72, hip: 98, length: 70, waistToHip: 20.5 },
 			{ style: 'gored', lining: true, pockets: true }
-		]
+		],
+		// A remake's block takes room on the first page: the fullest ticket still keeps to two pages.
+		['six gores, lined, with pockets, a remake with four changes', { waist: 74, hip: 98, length: 72, waistToHip: 20.5 }, { style: 'gored', lining: true, pockets: true }, REMAKE]
 	];
-	for (const [name, m, c] of CASES) {
+	for (const [name, m, c, remake] of CASES) {
 		for (const paper of ['A4', 'Letter'] as const) {
 			it(`${name} on ${paper}: two pages, no words on top of each other, nothing in the 11 mm edge`, async () => {
 				const file = join(work, `${name.replace(/\W+/g, '-')}-${paper}.pdf`);
-				writeFileSync(file, await renderTickets([makeTicket(input('QL-2060', m, c))], { paper, origin: 'http://x' }));
+				writeFileSync(file, await renderTickets([{ ...makeTicket(input('QL-2060', m, c)), remake }], { paper, origin: 'http://x' }));
 				const html = execFileSync('pdftotext', ['-bbox', file, '-']).toString();
 				const pages = html.split('<page ').slice(1);
 				expect(pages.length).toBe(2);
@@ -259,6 +290,8 @@ describe('cutting ticket PDF', () => {
 					}
 				}
 				expect(overlaps).toEqual([]);
+				// The remake's changes are on the ticket: above the fabric, or under the pieces when the first page is full.
+				if (remake) expect(execFileSync('pdftotext', [file, '-']).toString().replace(/\s+/g, ' ')).toContain('Waist: first cut 68 cm, now 70 cm');
 				// Office printers lose 4–6 mm at an edge (common practice): the pages print nothing within 11 mm of it.
 				execFileSync('pdftoppm', ['-r', '50', '-gray', file, join(work, `edge-${paper}`)]);
 				for (const n of [1, 2]) {

@@ -11,6 +11,7 @@ import { markerScale } from '../../drafting/drawing/marker';
 import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOff } from './lower';
 import { banners, facts, fitAdjustments, header, type Frame } from './page-one';
 import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
+import { remakeChanges, remakeHeight, remakeMark } from './remake';
 import { MM, heading } from './text';
 import type { Ticket } from '../outputs/ticket';
 
@@ -36,6 +37,10 @@ function frameOf(paper: Paper, landscape: boolean): Frame {
 	const [pw, ph] = landscape ? [h, w] : [w, h];
 	return { left: MARGIN, right: pw - MARGIN, top: MARGIN, bottom: ph - MARGIN };
 }
+
+/** What the fabric section's words need under its heading (points): measured on the fullest first
+ * page, a lined six-gore skirt with pockets on Letter. */
+const FABRIC_TEXT = 120;
 
 /** Free room under the pieces on a pieces page, for the lay drawing when the first page is short of it. */
 function roomUnder(placed: Placed[], area: Area): Area | null {
@@ -77,7 +82,15 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 	// The lay moves under the pieces when the first page could only show it at 1:50 or smaller and
 	// the pieces page has room for it at a larger scale.
 	const lastArea = piecesArea(frameOf(o.paper, plan.landscape));
-	const spare = plan.pages.length ? roomUnder(plan.pages[plan.pages.length - 1], lastArea) : null;
+	let spare = plan.pages.length ? roomUnder(plan.pages[plan.pages.length - 1], lastArea) : null;
+	// A remake's changes go above the fabric when the fabric's words still fit under them; on a full
+	// first page (a lined six-gore skirt on Letter) they go under the pieces, and the header says so.
+	const remakeH = remakeHeight(t.remake);
+	const remakeLater = remakeH > 0 && signTop - 10 - y - remakeH < FABRIC_TEXT && !!spare && spare.h >= remakeH + 17;
+	const laterTop = spare ? spare.y - 17 : 0;
+	if (remakeLater && spare) spare = spare.h - remakeH > 80 ? { ...spare, y: spare.y + remakeH, h: spare.h - remakeH } : null;
+	else y = remakeChanges(doc, t.remake, f, y);
+	remakeMark(doc, t, f, remakeLater ? pages : null);
 	const here = markerBox(f, y, signTop - 10);
 	let move = false;
 	if (t.estimate && spare) {
@@ -89,6 +102,7 @@ function renderOne(doc: PDFKit.PDFDocument, t: Ticket, o: RenderOptions) {
 		doc.addPage({ size: PAPER_SIZES[o.paper], layout: plan.landscape ? 'landscape' : 'portrait', margin: 0 });
 		const pf = frameOf(o.paper, plan.landscape);
 		piecesPage(doc, t, pf, placed, plan.scale, { index: i + 1, of: plan.pages.length });
+		if (remakeLater && i === plan.pages.length - 1) remakeChanges(doc, t.remake, { left: lastArea.x, right: lastArea.x + lastArea.w }, laterTop);
 		if (move && spare && i === plan.pages.length - 1) {
 			heading(doc, 'Lay on the fabric (its own scale)', spare.x, spare.y - 17, spare.w);
 			layDrawing(doc, t, spare);

@@ -1,7 +1,7 @@
 import { fail } from '@sveltejs/kit';
-import { and, desc, eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
-import { measurementProfiles, orders } from '$lib/server/db/schema';
+import { cardOf, cardsOf, deleteCard, setCardFit } from '$lib/server/account/cards';
+import { ordersOfShopper } from '$lib/server/order/view';
 import { deleteMeasurements } from '$lib/server/account/personal-data';
 import { currentRules } from '$lib/server/house/rules';
 import { checkCardFit, readCardFit } from '$lib/forms/card';
@@ -12,18 +12,14 @@ import { requireRole, SIGNED_IN } from '$lib/server/access';
 export const load: PageServerLoad = async (event) => {
 	const userId = requireRole(event, SIGNED_IN).id;
 	const [cards, myOrders, history] = await Promise.all([
-		db
-			.select({ id: measurementProfiles.id, name: measurementProfiles.name, units: measurementProfiles.units, waist: measurementProfiles.waist, hip: measurementProfiles.hip, length: measurementProfiles.length, waistToHip: measurementProfiles.waistToHip, source: measurementProfiles.source, waistToKnee: measurementProfiles.waistToKnee, adjustments: measurementProfiles.adjustments })
-			.from(measurementProfiles).where(eq(measurementProfiles.userId, userId)).orderBy(desc(measurementProfiles.updatedAt)),
-		db
-			.select({ number: orders.number, status: orders.status, total: orders.total, currency: orders.currency, createdAt: orders.createdAt, promisedDate: orders.promisedDate })
-			.from(orders)
-			.where(eq(orders.userId, userId))
-			.orderBy(desc(orders.createdAt))
-			.limit(5),
+		cardsOf(db, userId),
+		ordersOfShopper(db, userId, 5),
 		cardHistory(db, userId)
 	]);
-	return { cards, orders: myOrders, defaultKnee: (await currentRules(db)).rules.kneeDepth, history: history.map((h) => ({ ...h, at: h.at.toISOString() })) };
+	return {
+		// Only what the page shows of each card.
+		cards: cards.map((c) => ({ id: c.id, name: c.name, units: c.units, waist: c.waist, hip: c.hip, length: c.length, waistToHip: c.waistToHip, source: c.source, waistToKnee: c.waistToKnee, adjustments: c.adjustments })),
+		orders: myOrders, defaultKnee: (await currentRules(db)).rules.kneeDepth, history: history.map((h) => ({ ...h, at: h.at.toISOString() })) };
 };
 
 export const actions: Actions = {
@@ -34,12 +30,12 @@ export const actions: Actions = {
 		const id = Number(data.get('id'));
 		const none = 'We found no measure card of yours with that number, so nothing was changed.';
 		if (!Number.isSafeInteger(id) || id <= 0) return fail(404, { message: none });
-		const [card] = await db.select().from(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		const card = await cardOf(db, user.id, id);
 		if (!card) return fail(404, { message: none });
 		const { values, errors } = readCardFit(data);
 		const checked = checkCardFit(card, values, errors);
 		if (!checked.ok) return fail(400, { cardId: id, values, errors: checked.errors, message: 'Some values need a second look: nothing was changed.' });
-		await db.update(measurementProfiles).set({ waistToKnee: checked.waistToKnee, adjustments: checked.adjustments }).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
+		await setCardFit(db, user.id, id, { waistToKnee: checked.waistToKnee, adjustments: checked.adjustments });
 		return { cardId: id, message: `Measure card “${card.name}” saved.` };
 	},
 	deleteCard: async (event) => {
@@ -47,9 +43,7 @@ export const actions: Actions = {
 		const id = Number((await event.request.formData()).get('id'));
 		const none = 'We found no measure card of yours with that number, so nothing was deleted.';
 		if (!Number.isSafeInteger(id) || id <= 0) return fail(404, { message: none });
-		// Only her own card: the user id is part of the condition, and the count says whether there was one.
-		const [{ affectedRows }] = await db.delete(measurementProfiles).where(and(eq(measurementProfiles.id, id), eq(measurementProfiles.userId, user.id)));
-		if (affectedRows === 0) return fail(404, { message: none });
+		if (!(await deleteCard(db, user.id, id))) return fail(404, { message: none });
 		return { message: 'Measure card deleted.' };
 	},
 	deleteMeasurements: async (event) => {

@@ -1,9 +1,9 @@
 import { fail } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { houseRules, styles } from '$lib/server/db/schema';
+import { styleKinds } from '$lib/server/catalogue/listing';
 import { OWNER, requireRole } from '$lib/server/access';
 import { fitInsights } from '$lib/server/fit/insights';
-import { currentRules } from '$lib/server/house/rules';
+import { currentRules, saveRulesVersion } from '$lib/server/house/rules';
 import { sampleDrawing } from '$lib/server/quote/sample';
 import { DraftInputError, draftSkirt, resolveRules, toSvg, type StyleId } from '$lib/drafting';
 import { SAMPLE_FIGURE } from '$lib/server/quote/sample';
@@ -26,7 +26,7 @@ function applied(rules: HouseRules, s: RuleSuggestion): HouseRules {
 
 export const load: PageServerLoad = async (event) => {
 	requireRole(event, OWNER);
-	const [insights, { id, rules }, kinds] = await Promise.all([fitInsights(db), currentRules(db), db.select({ name: styles.name, kind: styles.kind }).from(styles)]);
+	const [insights, { id, rules }, kinds] = await Promise.all([fitInsights(db), currentRules(db), styleKinds(db)]);
 	const kindOf = new Map(kinds.map((k) => [k.name, k.kind]));
 	const suggestions = insights.suggestions.map((s) => {
 		const kind = kindOf.get(s.style) ?? 'straight';
@@ -50,7 +50,7 @@ export const actions: Actions = {
 		if (!s) return fail(404, { message: 'That suggestion no longer stands (the reports changed). Nothing was saved.' });
 		const { rules } = await currentRules(db);
 		const note = `From the fit page: ${s.words}`.slice(0, 255);
-		const [{ id }] = await db.insert(houseRules).values({ rules: applied(rules, s), note, createdBy: user.id }).$returningId();
+		const id = await saveRulesVersion(db, applied(rules, s), note, user.id);
 		return { message: `Saved as house rules version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };

@@ -1,10 +1,8 @@
 import { fail } from '@sveltejs/kit';
-import { desc, eq } from 'drizzle-orm';
 import { DraftInputError, resolveRules } from '$lib/drafting';
 import { CHOICE_FIELDS, RULE_FIELDS, getPath, ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { db } from '$lib/server/db';
-import { houseRules, users } from '$lib/server/db/schema';
-import { currentRules } from '$lib/server/house/rules';
+import { currentRules, rulesVersions, saveRulesVersion } from '$lib/server/house/rules';
 import { sampleDrawing } from '$lib/server/quote/sample';
 import type { Actions, PageServerLoad } from './$types';
 import { OWNER, requireRole } from '$lib/server/access';
@@ -12,12 +10,7 @@ import { OWNER, requireRole } from '$lib/server/access';
 export const load: PageServerLoad = async (event) => {
 	requireRole(event, OWNER);
 	const { id, rules } = await currentRules(db);
-	const versions = await db
-		.select({ id: houseRules.id, note: houseRules.note, createdAt: houseRules.createdAt, by: users.name })
-		.from(houseRules)
-		.leftJoin(users, eq(users.id, houseRules.createdBy))
-		.orderBy(desc(houseRules.id))
-		.limit(20);
+	const versions = await rulesVersions(db);
 	return {
 		version: id,
 		fields: RULE_FIELDS.map((f) => ({ path: f.path, label: f.label, help: f.help, unit: 'unit' in f ? f.unit : 'cm', step: 'step' in f ? f.step : 0.1, value: getPath(rules, f.path) as number })),
@@ -45,7 +38,7 @@ export const actions: Actions = {
 		}
 		if (!note) return fail(400, { message: 'Say in a few words what changed and why: the note stays with every order drafted with these rules.', errors: {} });
 		// A new version: orders already placed keep the rules they were drafted with.
-		const [{ id }] = await db.insert(houseRules).values({ rules, note, createdBy: user.id }).$returningId();
+		const id = await saveRulesVersion(db, rules, note, user.id);
 		return { message: `Saved as version ${id}. New orders are drafted with it; placed orders keep theirs.` };
 	}
 };

@@ -1,10 +1,10 @@
 import { json } from '@sveltejs/kit';
-import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/server/api/answers';
+import type { PaymentAwayAnswer, PlacedOrderAnswer } from '$lib/api/answers';
 import { env } from '$env/dynamic/private';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';
 import { orderApiSchema } from '$lib/forms/order-api';
-import { toCm } from '$lib/forms/quote';
+import { bagItemOf } from '$lib/forms/quote';
 import { validateMeasurements } from '$lib/drafting';
 import { createHash } from 'node:crypto';
 import { db } from '$lib/server/db';
@@ -32,7 +32,7 @@ export const POST: RequestHandler = async ({ request, locals, url, getClientAddr
 	const parsed = orderApiSchema.safeParse(body);
 	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const { items, shopper } = parsed.data;
-	const bag = items.map((item, i) => ({ id: `api-${i}-${crypto.randomUUID().slice(0, 8)}`, style: item.style, fabricId: item.fabricId, options: item.options, units: item.units, figuresSource: item.figuresSource, measurements: toCm(item.measurements, item.units) }));
+	const bag = items.map((item, i) => bagItemOf(item, `api-${i}-${crypto.randomUUID().slice(0, 8)}`));
 	for (const [i, item] of bag.entries()) {
 		const problems = validateMeasurements(item.measurements);
 		if (problems.length) return failureJson(failure(400, 'Some values need a second look.', { fields: Object.fromEntries(problems.map((p) => [`items.${i}.measurements.${p.field}`, [p.message]])) }));

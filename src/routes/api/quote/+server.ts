@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
-import type { QuoteAnswer } from '$lib/server/api/answers';
+import type { QuoteAnswer } from '$lib/api/answers';
 import { asBodyFailure, failure } from '$lib/failure';
 import { failureJson, invalidBody } from '$lib/server/answer';
-import { quoteSchema, toCm } from '$lib/forms/quote';
+import { quoteSchema, requestInCm } from '$lib/forms/quote';
 import { db } from '$lib/server/db';
 import { quoteSkirt } from '$lib/server/quote/quote';
 import type { RequestHandler } from './$types';
@@ -20,7 +20,7 @@ export const POST: RequestHandler = async ({ request }) => {
 	const parsed = quoteSchema.safeParse(body);
 	if (!parsed.success) return failureJson(invalidBody(parsed.error));
 	const q = parsed.data;
-	const result = await quoteSkirt(db, { measurements: toCm(q.measurements, q.units), style: q.style, options: q.options, fabricId: q.fabricId, units: q.units, figuresSource: q.figuresSource });
+	const result = await quoteSkirt(db, requestInCm(q));
 	if (!result.ok) return failureJson(asBodyFailure(result));
 	return json(result.quote satisfies QuoteAnswer);
 };

@@ -1,10 +1,9 @@
 import { error } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
 import { checkOrderToken } from '$lib/server/order/link';
 import { orderOfReport } from '$lib/server/fit/report';
 import { photoBytes } from '$lib/server/fit/photos';
+import { hasFitLeave } from '$lib/server/fit/workroom';
 import type { RequestHandler } from './$types';
 
 // A fit photo shows a body: never public, never cached by anyone else. Checked on every request: the
@@ -16,11 +15,7 @@ export const GET: RequestHandler = async ({ params, locals, url }) => {
 	if (!photo) error(404, 'No such photo.');
 	const [owner] = await orderOfReport(db, [photo.reportId]);
 	const viewer = locals.user;
-	let allowed = !!owner && ((viewer && owner.userId === viewer.id) || checkOrderToken(owner.number, url.searchParams.get('t')) || viewer?.role === 'owner');
-	if (!allowed && viewer?.role === 'cutter') {
-		const [row] = await db.select({ leave: users.fitDecider }).from(users).where(eq(users.id, viewer.id));
-		allowed = !!row?.leave;
-	}
+	const allowed = !!owner && ((viewer && owner.userId === viewer.id) || checkOrderToken(owner.number, url.searchParams.get('t')) || (viewer ? await hasFitLeave(db, viewer) : false));
 	if (!allowed) error(404, 'No such photo.');
 	return new Response(photo.bytes as Uint8Array<ArrayBuffer>, {
 		headers: {

@@ -18,9 +18,9 @@ export const actions: Actions = {
 		const ids = form.getAll('ids').map(String);
 		const kinds = form.getAll('kinds').map(String);
 		const parsed = parseJobRequest(ids, kinds);
-		if ('problem' in parsed) return fail(400, { message: parsed.problem });
-		const job = await createJob(db, { ...parsed, requestedBy: user.id });
-		if ('problem' in job) return fail(404, { message: job.problem });
+		if (!parsed.ok) return fail(parsed.status, { message: parsed.message });
+		const job = await createJob(db, { orderIds: parsed.orderIds, kinds: parsed.kinds, requestedBy: user.id });
+		if (!job.ok) return fail(job.status, { message: job.message });
 		kickJobWorker();
 		redirect(303, `/workroom/jobs/${job.id}`);
 	}

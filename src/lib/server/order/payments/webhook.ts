@@ -7,6 +7,8 @@ import { paymentConfirmedMail, refundMail } from '$lib/server/mail/templates';
 import { moveLocked, type Tx } from '../stage';
 import { orderSummary } from '../summary';
 import { formatMoney } from '$lib/format';
+import { remakePromise } from '$lib/fit/promise';
+import { shopSettingsOf } from '../../house/rules';
 import { STAGE_LABELS } from '$lib/orders/stages';
 
 const PROVIDER = { id: null, label: 'Payment provider' };
@@ -79,7 +81,8 @@ async function sessionPaid(tx: Tx, stripe: Stripe, session: Stripe.Checkout.Sess
 	await tx.update(payments).set({ state: 'paid', paymentIntentId: intent }).where(eq(payments.id, payment.id));
 	await moveLocked(tx, order, { to: 'paid', by: 'provider', actor: PROVIDER, set: { paidAt: new Date() }, note: `Paid ${formatMoney(payment.amount, payment.currency)}` });
 	const summary = await orderSummary(tx, { ...order, status: 'paid' });
-	return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...paymentConfirmedMail(summary) })];
+	const promise = remakePromise(await shopSettingsOf(tx));
+	return [await enqueueMail(tx, { to: order.email, orderId: order.id, ...paymentConfirmedMail({ ...summary, promise }) })];
 }
 
 /** The order a session names in its metadata or reference, for a warning about a session we never made. */

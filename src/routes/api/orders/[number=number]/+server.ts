@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { FailureAnswer, ShopperOrderAnswer } from '$lib/server/api/answers';
+import type { FailureAnswer, ShopperOrderAnswer } from '$lib/api/answers';
 import { db } from '$lib/server/db';
 import { orderForShopper } from '$lib/server/order/view';
 import type { RequestHandler } from './$types';

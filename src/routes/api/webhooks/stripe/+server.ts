@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { FailureAnswer, WebhookAnswer } from '$lib/server/api/answers';
+import type { FailureAnswer, WebhookAnswer } from '$lib/api/answers';
 import { db } from '$lib/server/db';
 import { deliverQueued } from '$lib/server/mail';
 import { stripe, webhookSecret } from '$lib/server/order/payments/stripe';

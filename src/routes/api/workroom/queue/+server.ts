@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { QueueAnswer } from '$lib/server/api/answers';
+import type { QueueAnswer } from '$lib/api/answers';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { workQueue } from '$lib/server/order/queue';

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { SummaryAnswer } from '$lib/server/api/answers';
+import type { SummaryAnswer } from '$lib/api/answers';
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { lowStockFabrics, stageCounts } from '$lib/server/order/stats';

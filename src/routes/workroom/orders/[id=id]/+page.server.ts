@@ -6,7 +6,7 @@ import { orderForWorkroom } from '$lib/server/order/workroom-view';
 import { paperChoiceOf } from '$lib/server/outputs/preference';
 import { a0FitsOrder } from '$lib/server/outputs/sheet';
 import { shopSettingsOf } from '$lib/server/house/rules';
-import { remakeChanges } from '$lib/server/fit/workroom';
+import { remakeChanges } from '$lib/server/fit/remake-changes';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

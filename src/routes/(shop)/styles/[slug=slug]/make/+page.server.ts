@@ -1,10 +1,9 @@
 import { error, fail, redirect } from '@sveltejs/kit';
-import { and, desc, eq } from 'drizzle-orm';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { bagItemFrom, makeFormSchema } from '$lib/forms/make';
 import { db } from '$lib/server/db';
-import { measurementProfiles } from '$lib/server/db/schema';
+import { cardsOf, saveCard } from '$lib/server/account/cards';
 import { listFabrics, styleBySlug } from '$lib/server/catalogue/listing';
 import { MAX_ITEMS, readBag, writeBag } from '$lib/server/quote/bag';
 import { quoteSkirt } from '$lib/server/quote/quote';
@@ -19,7 +18,7 @@ export const load: PageServerLoad = async ({ params, locals }) => {
 	if (!style || style.retiredAt) error(404, 'We do not make that style.');
 	const [fabrics, cards, { rules }, history] = await Promise.all([
 		listFabrics(db),
-		locals.user ? db.select().from(measurementProfiles).where(eq(measurementProfiles.userId, locals.user.id)).orderBy(desc(measurementProfiles.updatedAt)) : [],
+		locals.user ? cardsOf(db, locals.user.id) : [],
 		currentRules(db),
 		locals.user ? cardHistory(db, locals.user.id) : []
 	]);
@@ -60,14 +59,9 @@ export const actions: Actions = {
 		if (form.data.saveCard && locals.user) {
 			const m = item.measurements;
 			const card = { name: form.data.cardName, waist: m.waist, hip: m.hip, length: m.length, waistToHip: m.waistToHip ?? null, waistToKnee: m.waistToKnee ?? null, adjustments: m.adjustments ?? null, units: item.units, source: item.figuresSource, consentAt: new Date() };
-			if (form.data.replaceCardId) {
-				// Save over one of her own cards only (the user id is part of the condition): chart or
-				// flat-garment figures replaced by measured ones, or the other way round.
-				const [{ affectedRows }] = await db.update(measurementProfiles).set(card).where(and(eq(measurementProfiles.id, form.data.replaceCardId), eq(measurementProfiles.userId, locals.user.id)));
-				if (affectedRows === 0) return setError(form, 'replaceCardId', 'We found no measure card of yours with that number: choose one of yours, or save a new card.');
-			} else {
-				await db.insert(measurementProfiles).values({ userId: locals.user.id, ...card });
-			}
+			// A new card, or over one of her own (chart or flat-garment figures replaced by measured ones).
+			if (!(await saveCard(db, locals.user.id, card, form.data.replaceCardId)))
+				return setError(form, 'replaceCardId', 'We found no measure card of yours with that number: choose one of yours, or save a new card.');
 		}
 		writeBag(cookies, [...bag, item]);
 		redirect(303, '/bag');

@@ -1,11 +1,11 @@
 // The configure page's two live sources: the engine drafting and drawing in the browser on every change
 // (loaded after first paint, its own chunk), and the server's quote (price, metres, stock, ship date),
 // asked for debounced, a newer request cancelling the one still in flight.
-import type { MakeForm } from '$lib/forms/make';
+import { optionsOfForm, skirtRequestOf, type MakeForm } from '$lib/forms/make';
 import type { Preview, PreviewInput } from '$lib/drafting/preview';
 import type { HouseRules } from '$lib/drafting/rules';
 import type { StyleId } from '$lib/drafting/options';
-import type { Quote } from '$lib/server/quote/quote';
+import type { QuoteAnswer } from '$lib/api/answers';
 import type { ConfirmAsk } from '$lib/forms/confirm';
 
 type Fabric = { id: number; name: string; colour: string; swatchHex: string; imageUrl: string | null };
@@ -19,15 +19,6 @@ export function typedCm(form: MakeForm) {
 	const cm = (v: number | null | undefined) => (typeof v === 'number' && Number.isFinite(v) ? round1(form.units === 'in' ? v * 2.54 : v) : null);
 	return { waist: cm(f.waist), hip: cm(f.hip), length: cm(f.length), waistToHip: f.unknownDepth ? null : cm(f.waistToHip), waistToKnee: cm(f.waistToKnee) };
 }
-
-export const optionsOf = (form: MakeForm) => ({
-	waistband: form.waistband,
-	closure: { kind: form.closureKind, position: form.closurePosition },
-	lining: form.lining,
-	pockets: form.pockets,
-	vent: form.vent,
-	...(form.hemDepth ? { hemDepth: form.hemDepth } : {})
-});
 
 export class LiveSkirt {
 	engine = $state<Engine | null>(null);
@@ -59,7 +50,7 @@ export function previewInput(style: StyleId, form: MakeForm, rules: HouseRules, 
 	return {
 		style,
 		measurements: typedCm(form),
-		options: optionsOf(form),
+		options: optionsOfForm(form),
 		rules,
 		cloth: fabric ? { colour: fabric.swatchHex, image: fabric.imageUrl, name: `${fabric.name.toLowerCase()}, ${fabric.colour.toLowerCase()}` } : undefined,
 		units: form.units,
@@ -69,7 +60,7 @@ export function previewInput(style: StyleId, form: MakeForm, rules: HouseRules, 
 }
 
 export class LiveQuote {
-	quote = $state<Quote | null>(null);
+	quote = $state<QuoteAnswer | null>(null);
 	problem = $state<string | null>(null);
 	/** A figure outside what a block fits: asked, never silently drafted ("did you mean …?"). */
 	confirmAsk = $state<ConfirmAsk | null>(null);
@@ -109,27 +100,4 @@ export class LiveQuote {
 }
 
 /** The quote request: only what the server alone can answer needs it, so it is sent once the form is whole. */
-export function quoteRequest(style: string, form: MakeForm) {
-	return JSON.stringify({
-		style,
-		units: form.units,
-		fabricId: form.fabricId || undefined,
-		measurements: {
-			waist: form.waist,
-			hip: form.hip,
-			length: form.length,
-			waistToHip: form.unknownDepth ? null : form.waistToHip,
-			waistToKnee: form.waistToKnee,
-			confirmed: form.confirmed,
-			adjustments: {
-				hollowBack: form.hollowBack,
-				roundedAbdomen: form.roundedAbdomen,
-				prominentSeat: form.prominentSeat,
-				highHip: form.highHip,
-				oneHip: form.oneHipSide ? { side: form.oneHipSide, higher: form.oneHipHigher, fuller: form.oneHipFuller } : null,
-				ease: { waist: form.easeWaist, hip: form.easeHip }
-			}
-		},
-		options: optionsOf(form)
-	});
-}
+export const quoteRequest = (style: string, form: MakeForm) => JSON.stringify(skirtRequestOf(style, form));

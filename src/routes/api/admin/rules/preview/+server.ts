@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { DraftInputError, draftSkirt, resolveRules, toSvg } from '$lib/drafting';
 import { fieldErrors } from '$lib/forms/errors';
-import type { FailureAnswer, RulesPreviewAnswer } from '$lib/server/api/answers';
+import type { FailureAnswer, RulesPreviewAnswer } from '$lib/api/answers';
 import { ruleFormProblems, rulesFromForm } from '$lib/server/house/rules-form';
 import { rulesPreviewSchema } from '$lib/server/house/rules-preview';
 import { db } from '$lib/server/db';

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import type { FailureAnswer, StageMovedAnswer } from '$lib/server/api/answers';
+import type { FailureAnswer, StageMovedAnswer } from '$lib/api/answers';
 import { fieldErrors } from '$lib/forms/errors';
 import { stageSchema } from '$lib/forms/stage';
 import { requireRole, STAFF } from '$lib/server/access';
