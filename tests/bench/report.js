@@ -156,7 +156,7 @@ export function rowsFrom(raw) {
 		rows.push(
 			row({
 				id: 'jobs.batch20',
-				measure: `jobs: ${job.orders}-order batch (ticket + DXF), app peak RSS`,
+				measure: `jobs: ${job.orders}-order batch (ticket, DXF, tiled A4, lay), app peak RSS`,
 				unit: 'MB',
 				median: r1(job.peakMb),
 				floor: r1(job.rssBeforeMb),

@@ -166,7 +166,7 @@ async function main() {
 	);
 
 	// After the checkout, so the database holds more than 20 orders to batch.
-	const batch = await measure('outputs: GET pattern.dxf; a 20-order batch job (ticket + DXF) and the app\'s peak memory', async () => {
+	const batch = await measure('outputs: GET pattern.dxf; a 20-order batch job (ticket, DXF, tiled A4, lay) and the app\'s peak memory', async () => {
 		const db = await mysql.createConnection({ uri: env.DATABASE_URL });
 		try {
 			// Run without the checkout, the seed's dozen orders are too few: 20 more are placed and paid the
