@@ -15,9 +15,10 @@ import { signInCookie } from '../support/session';
 const db = testDb();
 let cutter = '';
 let shopper = '';
-// Seeded orders (src/lib/server/seed/orders.ts): a straight, a six-gore, a full-circle and a pencil skirt.
+// Seeded orders (src/lib/server/seed/orders.ts): a straight, a six-gore, a full-circle and a pencil skirt
+// (its pieces, with facings, fit one A0 sheet).
 const ids: Record<'straight' | 'gored' | 'circle' | 'pencil', number> = { straight: 0, gored: 0, circle: 0, pencil: 0 };
-const NUMBERS = { straight: 'QL-1008', gored: 'QL-1005', circle: 'QL-1007', pencil: 'QL-1010' } as const;
+const NUMBERS = { straight: 'QL-1008', gored: 'QL-1005', circle: 'QL-1007', pencil: 'QL-1004' } as const;
 
 beforeAll(async () => {
 	const find = (role: string, email?: string) => DEMO_SIGN_INS.accounts.find((a) => a.role === role && (!email || a.email === email))!;
