@@ -150,7 +150,7 @@ export function rowsFrom(raw) {
 				ratio: r3(route.median / route.floor.median),
 				target: '< 50 ms',
 				met: route.median < 50,
-				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB`
+				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB; first waited ${(batch.waitedForLaysSeconds ?? []).join(' s and ')} s for the background cutter's lays of paid orders`
 			})
 		);
 		rows.push(
