@@ -1,10 +1,10 @@
 // The pieces of the full-scale files: one pdfkit document with Lora embedded, the pieces as the drawing
 // model's marks in centimetres of the strip, and the test square every full-scale page is checked by.
 import PDFDocument from 'pdfkit';
-import type { Piece } from '../../drafting';
-import { PALETTE, ptPerCm, type Mark, type Rect, type Tone } from '../../drafting/drawing/model';
-import { pieceMarks } from '../../drafting/drawing/piece';
-import { spotMap, type StripPlan } from '../../drafting/drawing/tiles';
+import type { Piece } from '$lib/drafting';
+import { PALETTE, ptPerCm, type Mark, type Rect, type Tone } from '$lib/drafting/drawing/model';
+import { pieceMarks } from '$lib/drafting/drawing/piece';
+import { spotMap, type StripPlan } from '$lib/drafting/drawing/tiles';
 import { pdfMeasure } from '../ticket/draw-pdf';
 import { registerLora } from '../fonts/lora';
 import { line } from '../ticket/text';

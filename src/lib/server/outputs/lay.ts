@@ -1,11 +1,11 @@
 // The lay at full size: a marker printed on a roll as wide as the cloth (or as the folded cloth) to lay on
 // top of it and cut through. The cloth runs down the page: x across the cloth from the fold (or the
 // near selvedge), y along it from the start of the lay. One page per skirt of the order.
-import { labelPoint } from '../../drafting/drawing/marker';
-import { PALETTE, through, type Mark } from '../../drafting/drawing/model';
-import { arrowhead } from '../../drafting/drawing/symbols';
-import type { Layout } from '../../drafting/fabric';
-import { formatCm } from '../../drafting/units';
+import { labelPoint } from '$lib/drafting/drawing/marker';
+import { PALETTE, through, type Mark } from '$lib/drafting/drawing/model';
+import { arrowhead } from '$lib/drafting/drawing/symbols';
+import type { Layout } from '$lib/drafting/fabric';
+import { formatCm } from '$lib/drafting/units';
 import { drawMarks } from '../ticket/draw-pdf';
 import { line } from '../ticket/text';
 import { K, newDoc, testSquare, type Doc } from './doc';

@@ -3,7 +3,7 @@
 // the words read back from the file by pdf-parse, an independent PDF reader.
 import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
-import { resolveRules } from '../../drafting';
+import { resolveRules } from '$lib/drafting';
 import type { StoredChoice } from '../order/lines';
 import { makeTicket } from './ticket';
 import { OutputError } from './errors';

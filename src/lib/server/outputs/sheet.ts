@@ -3,9 +3,9 @@
 // on a cutting table). Pieces that do not all fit one A0 sheet are refused with the way out (the roll, or
 // a tiled print): a copy shop prints a file page by page, and a second sheet would be a second pattern to
 // line up by eye with no alignment marks.
-import { PALETTE } from '../../drafting/drawing/model';
-import type { Piece } from '../../drafting';
-import { itemOf, narrowestStrip, packSheets, type StripPlan } from '../../drafting/drawing/tiles';
+import { PALETTE } from '$lib/drafting/drawing/model';
+import type { Piece } from '$lib/drafting';
+import { itemOf, narrowestStrip, packSheets, type StripPlan } from '$lib/drafting/drawing/tiles';
 import { drawMarks, type Look } from '../ticket/draw-pdf';
 import { MM, line } from '../ticket/text';
 import { DARK, K, newDoc, stripMarks, testSquare, type Doc } from './doc';

@@ -1,6 +1,6 @@
 // The HTTP answers of the ticket routes, shared by the single and the batch route: a PDF inline, or a
 // JSON message saying which order is missing or why it cannot be drafted again.
-import { DraftInputError } from '../../drafting';
+import { DraftInputError } from '$lib/drafting';
 import { failure, type Failure, type FailureStatus } from '$lib/failure';
 import { failureJson } from '../answer';
 import type { Db } from '../db/client';

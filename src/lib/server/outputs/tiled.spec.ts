@@ -3,8 +3,8 @@
 // broken if need be, so none is cut in two by a page edge. Widths measured in the embedded Lora, as the
 // PDF sets them. Three seeded skirts on both papers.
 import { describe, expect, it } from 'vitest';
-import { resolveRules } from '../../drafting';
-import type { Mark } from '../../drafting/drawing/model';
+import { resolveRules } from '$lib/drafting';
+import type { Mark } from '$lib/drafting/drawing/model';
 import { pdfMeasure } from '../ticket/draw-pdf';
 import { newDoc } from './doc';
 import { sourceOf } from './source';

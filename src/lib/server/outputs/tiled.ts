@@ -3,9 +3,9 @@
 // cell of the sheet's grid (row letter, column number), showing a strip of the neighbouring cells past
 // its trim line, so a page trimmed on its left and top edges laps over its neighbours with the circles
 // on the trim lines matching.
-import { PALETTE, type Rect } from '../../drafting/drawing/model';
-import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '../../drafting/drawing/tiles';
-import { flatten } from '../../drafting/outline';
+import { PALETTE, type Rect } from '$lib/drafting/drawing/model';
+import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '$lib/drafting/drawing/tiles';
+import { flatten } from '$lib/drafting/outline';
 import { drawMarks } from '../ticket/draw-pdf';
 import { MM, line } from '../ticket/text';
 import { K, boxed, newDoc, stripMarks, testSquare, type BoxedMark, type Doc } from './doc';

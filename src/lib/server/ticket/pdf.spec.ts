@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, describe, expect, it } from 'vitest';
-import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '../../drafting';
+import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '$lib/drafting';
 import { renderTickets } from './pdf';
 import { makeTicket, type TicketInput } from '../outputs/ticket';
 import type { RemakeChanges } from '../fit/remake-changes';

@@ -1,6 +1,6 @@
 // Units and text drawing for the cutting ticket. Every single line of text goes through
 // `line`, which sets it on its baseline in Lora, run by run (see fonts.ts), shrunk or cut to fit.
-import { PALETTE } from '../../drafting/drawing/model';
+import { PALETTE } from '$lib/drafting/drawing/model';
 import { runsOf, useFont, type Weight } from '../fonts/lora';
 
 /** The one palette (the drawing model's), by the names page layout uses. */
@@ -9,7 +9,7 @@ export const { ink: INK, chalk: CHALK, thread: THREAD, pencil: PENCIL, paper: PA
 /** PDF points in a millimetre: 72 points to the inch, 25.4 mm to the inch. */
 export const MM = 72 / 25.4;
 
-export { ptPerCm } from '../../drafting/drawing/model';
+export { ptPerCm } from '$lib/drafting/drawing/model';
 
 type Doc = PDFKit.PDFDocument;
 
