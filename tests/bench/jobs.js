@@ -1,10 +1,14 @@
 // @ts-check
 // Outputs for the cutting table: the open DXF over HTTP, and the peak memory of the app process while
-// its background worker makes the files (ticket + DXF) of a 20-order batch and zips them.
+// its background worker makes every file kind of a 20-order batch (ticket, DXF, tiled A4 pattern, lay) and
+// zips them.
 import { readFileSync, writeFileSync } from 'node:fs';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
 import { signInCookie } from './ticket.js';
 import { summarise } from './stats.js';
+
+/** Every kind of file a job makes, the heaviest included (the tiled print, the lay with its search). */
+export const KINDS = ['ticket', 'dxf', 'pattern-a4', 'lay'];
 
 export const DXF_ROUTE = '/workroom/orders/[id=id]/pattern.dxf';
 
@@ -43,7 +47,7 @@ function memoryOf(/** @type {number} */ pid) {
 }
 
 /**
- * A job of `count` orders (ticket + DXF each), queued as the queue page does and polled as the job page
+ * A job of `count` orders (ticket, DXF, tiled A4 pattern and lay PDF each), queued as the queue page does and polled as the job page
  * does; the app's resident-set high-water mark is reset first (Linux: "5" to /proc/PID/clear_refs), so
  * the peak is this batch's, not an earlier load test's.
  * @param {{ appUrl: string, appPid: number, orderIds: number[] }} o */
@@ -58,8 +62,7 @@ export async function measureBatch(o) {
 	const before = memoryOf(o.appPid);
 	const body = new URLSearchParams();
 	for (const id of o.orderIds) body.append('ids', String(id));
-	body.append('kinds', 'ticket');
-	body.append('kinds', 'dxf');
+	for (const kind of KINDS) body.append('kinds', kind);
 	const t = performance.now();
 	const res = await fetch(`${o.appUrl}/workroom/jobs?/prepare`, {
 		method: 'POST',

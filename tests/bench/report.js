@@ -150,19 +150,19 @@ export function rowsFrom(raw) {
 				ratio: r3(route.median / route.floor.median),
 				target: '< 50 ms',
 				met: route.median < 50,
-				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB`
+				notes: `order ${route.number}, ${route.n} GETs one at a time, ${Math.round(route.bytes / 1024)} KB; first waited ${(batch.waitedForLaysSeconds ?? []).join(' s and ')} s for the background cutter's lays of paid orders`
 			})
 		);
 		rows.push(
 			row({
 				id: 'jobs.batch20',
-				measure: `jobs: ${job.orders}-order batch (ticket + DXF), app peak RSS`,
+				measure: `jobs: ${job.orders}-order batch (ticket, DXF, tiled A4, lay), app peak RSS`,
 				unit: 'MB',
 				median: r1(job.peakMb),
 				floor: r1(job.rssBeforeMb),
 				floorWhat: 'app RSS before the job',
 				ratio: r3(job.peakMb / job.rssBeforeMb),
-				notes: `${job.peakFrom}; sampled peak ${r1(job.sampledPeakMb)} MB; ${r1(job.seconds)} s to done, zip ${Math.round(job.zipBytes / 1024)} KB, ${batch.failures} orders not made`
+				notes: `${job.peakFrom}; sampled peak ${r1(job.sampledPeakMb)} MB; ${r1(job.seconds)} s to done, zip ${Math.round(job.zipBytes / 1024)} KB, ${job.failures} orders not made`
 			})
 		);
 	}
@@ -378,24 +378,25 @@ function outputRows(o) {
 			median: ms(o.tiled),
 			p95: r1(o.tiled.p95),
 			floor: ms(o.floor),
-			floorWhat: `bare pdfkit, ${o.pages} pages, same Lora`,
+			floorWhat: `bare pdfkit: ${o.pages} pages, the same words on each (${o.floorChars} letters), same Lora faces`,
 			ratio: r3(o.tiled.median / o.floor.median),
 			target: '≤ 3× floor',
 			met: o.tiled.median <= 3 * o.floor.median,
-			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB; ${o.tiled.n} runs`
+			notes: `${o.pages} pages, ${Math.round(o.bytes / 1024)} KiB (floor ${Math.round(o.floorBytes / 1024)} KiB); ${o.tiled.n} runs, each timed in turn with the floor; run by run ratio median ${r3(o.ratio.median)}; CPU time ${r1(o.cpu.tiled.median)} ms vs ${r1(o.cpu.floor.median)} ms = ${r3(o.cpu.tiled.median / o.cpu.floor.median)}×`
 		}),
+		row({ id: 'outputs.a0', measure: `outputs: A0 PDF, pencil skirt (${o.a0Pages} page${o.a0Pages === 1 ? '' : 's'})`, unit: 'ms', median: ms(o.a0), p95: r1(o.a0.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.a0.median / o.floor.median) }),
 		row({ id: 'outputs.roll', measure: 'outputs: roll PDF (91.4 cm), full-circle skirt', unit: 'ms', median: ms(o.roll), p95: r1(o.roll.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.roll.median / o.floor.median) }),
 		row({ id: 'outputs.projector', measure: 'outputs: projector PDF, full-circle skirt', unit: 'ms', median: ms(o.projector), p95: r1(o.projector.p95), floor: ms(o.floor), floorWhat: 'bare pdfkit (as above)', ratio: r3(o.projector.median / o.floor.median) }),
 		row({
 			id: 'outputs.lay',
-			measure: 'outputs: lay PDF at full size, drawing only',
+			measure: `outputs: lay PDF at full size, drawing only (${o.layPages} page${o.layPages === 1 ? '' : 's'})`,
 			unit: 'ms',
 			median: ms(o.layDraw),
 			p95: r1(o.layDraw.p95),
 			floor: ms(o.floor),
 			floorWhat: 'bare pdfkit (as above)',
 			ratio: r3(o.layDraw.median / o.floor.median),
-			notes: `the engine's lay search before it: median ${ms(o.laySearch)} ms`
+			notes: `the engine's lay search before it: median ${ms(o.laySearch)} ms; lay PDF with its search ${r1(o.layDraw.median + o.laySearch.median)} ms`
 		})
 	];
 }

@@ -5,7 +5,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { fabrics, houseRules, orderLines, orders, outputPreferences, styles, users } from '../../src/lib/server/db/schema';
 import { DEMO_SIGN_INS } from '../../src/lib/server/seed/demo-accounts.js';
-import { loadTickets } from '../../src/lib/server/ticket/load';
+import { loadTickets } from '../../src/lib/server/outputs/ticket-load';
 import { testDb } from '../support/db';
 import { testEnv } from '../support/env';
 import { largestPieceOnSheet } from '../support/tiles';
@@ -15,9 +15,10 @@ import { signInCookie } from '../support/session';
 const db = testDb();
 let cutter = '';
 let shopper = '';
-// Seeded orders (src/lib/server/seed/orders.ts): a straight, a six-gore and a full-circle skirt.
-const ids: Record<'straight' | 'gored' | 'circle', number> = { straight: 0, gored: 0, circle: 0 };
-const NUMBERS = { straight: 'QL-1008', gored: 'QL-1005', circle: 'QL-1007' } as const;
+// Seeded orders (src/lib/server/seed/orders.ts): a straight, a six-gore, a full-circle and a pencil skirt
+// (its pieces, with facings, fit one A0 sheet).
+const ids: Record<'straight' | 'gored' | 'circle' | 'pencil', number> = { straight: 0, gored: 0, circle: 0, pencil: 0 };
+const NUMBERS = { straight: 'QL-1008', gored: 'QL-1005', circle: 'QL-1007', pencil: 'QL-1004' } as const;
 
 beforeAll(async () => {
 	const find = (role: string, email?: string) => DEMO_SIGN_INS.accounts.find((a) => a.role === role && (!email || a.email === email))!;
@@ -132,12 +133,28 @@ describe('roll, A0 and projector', () => {
 		expect(Math.abs(page.w - (120 / 2.54) * 20)).toBeLessThanOrEqual(1);
 	});
 
-	it('A0 sheets are 841 × 1189 mm (ISO 216), upright or on their side', async () => {
-		const pdf = await pdfOf(`/workroom/orders/${ids.gored}/pattern.pdf?paper=a0`);
+	it('A0 is one sheet of 841 × 1189 mm (ISO 216), upright or on its side, its title and square once', async () => {
+		const pdf = await pdfOf(`/workroom/orders/${ids.pencil}/pattern.pdf?paper=a0`);
+		expect(pageCount(pdf)).toBe(1);
 		const [page] = renderPages(pdf, 10, 1);
 		const dims = [page.w, page.h].sort((a, b) => a - b);
 		expect(Math.abs(dims[0] - (84.1 / 2.54) * 10)).toBeLessThanOrEqual(1);
 		expect(Math.abs(dims[1] - (118.9 / 2.54) * 10)).toBeLessThanOrEqual(1);
+		const text = pdfText(pdf);
+		expect(text.match(/Full-size pattern on A0/g)).toHaveLength(1);
+		expect(text.match(/print at 100 %, no scaling; measure this/g)).toHaveLength(1);
+	});
+
+	it('pieces that need more than one A0 sheet are refused with the way out, not printed on several sheets', async () => {
+		const res = await get(`/workroom/orders/${ids.gored}/pattern.pdf?paper=a0`, cutter, 'application/json');
+		expect(res.status).toBe(400);
+		expect(((await res.json()) as { message: string }).message).toMatch(/do not all fit on one A0 sheet.*plotter roll.*tiled/);
+		// The order page says so before anyone downloads: its A0 choice is there but cannot be chosen.
+		const page = await (await get(`/workroom/orders/${ids.gored}`, cutter, 'text/html')).text();
+		expect(page).toMatch(/<option value="a0" disabled[^>]*>A0 sheet: these pieces need more than one/);
+		const fits = await (await get(`/workroom/orders/${ids.pencil}`, cutter, 'text/html')).text();
+		expect(fits).toMatch(/<option value="a0"[^>]*>A0 sheet \(copy shop\)/);
+		expect(fits).not.toMatch(/<option value="a0" disabled/);
 	});
 
 	it('the projector file is one page on a dark ground; its light square is 10 cm at 40 dpi (157.5 px ± 1)', async () => {

@@ -4,7 +4,7 @@ import DxfParser from 'dxf-parser';
 import { describe, expect, it } from 'vitest';
 import { draftSkirt } from '../index';
 import { pathLength, pointAt, type Point } from '../geometry';
-import { blockName, CURVE_TOLERANCE_CM, DXF_LAYER, flattenWithin, piecesToDxf, worstGap } from './dxf';
+import { blockName, CURVE_TOLERANCE_CM, DXF_LAYER, DXF_LETTER, flattenWithin, pieceText, piecesToDxf, worstGap } from './dxf';
 
 const size12 = { waist: 68, hip: 94, length: 62, waistToHip: 20.6 };
 
@@ -100,4 +100,43 @@ describe('the open DXF, read back with dxf-parser', () => {
 		expect(header).toContain('Units: METRIC');
 		expect(Object.keys(dxf.tables.layer.layers)).toEqual(expect.arrayContaining(Object.values(DXF_LAYER)));
 	});
+});
+
+describe('the DXF words', () => {
+	// A CAD font sets a letter some 0.6 of the text's em wide (its cap height is 0.7 em), wider than Lora:
+	// the stack is placed for that width (common practice for the plain CAD fonts; from memory).
+	const across = (t: ReturnType<typeof pieceText>[number]) => [...t.text].length * t.size * DXF_LETTER;
+	for (const c of [...cases, { label: 'six gores, lined, with pockets', choice: { style: 'gored' as const, lining: true, pockets: true } }])
+		it(`${c.label}: every line of each piece's words lies inside its seam line and off its grain line`, () => {
+			for (const piece of draftSkirt(size12, c.choice).pieces) {
+				const seam = flattenWithin(piece.seam.segments).points;
+				const inside = (q: Point) => {
+					let n = false;
+					for (let i = 0, j = seam.length - 1; i < seam.length; j = i++)
+						if (seam[i].y > q.y !== seam[j].y > q.y && q.x < ((seam[j].x - seam[i].x) * (q.y - seam[i].y)) / (seam[j].y - seam[i].y) + seam[i].x) n = !n;
+					return n;
+				};
+				const g = piece.grain;
+				for (const t of pieceText(piece, 'QL-1005')) {
+					const rad = (t.angle * Math.PI) / 180;
+					const [ux, uy] = [Math.cos(rad), Math.sin(rad)];
+					const [w, h] = [across(t) / 2, (t.size * 0.7) / 2];
+					const corners = [
+						[-w, -h],
+						[w, -h],
+						[w, h],
+						[-w, h]
+					].map(([a, b]) => ({ x: t.at.x + a * ux - b * uy, y: t.at.y + a * uy + b * ux }));
+					for (const q of corners) expect(inside(q), `${piece.name}: “${t.text}”`).toBe(true);
+					// Off the grain line: the line's middle stretch does not pass through the text's box.
+					const xs = corners.map((q) => q.x);
+					const ys = corners.map((q) => q.y);
+					const hit = [0.3, 0.4, 0.5, 0.6, 0.7].some((k) => {
+						const q = { x: g.from.x + (g.to.x - g.from.x) * k, y: g.from.y + (g.to.y - g.from.y) * k };
+						return q.x > Math.min(...xs) && q.x < Math.max(...xs) && q.y > Math.min(...ys) && q.y < Math.max(...ys);
+					});
+					expect(hit, `${piece.name}: “${t.text}” on the grain line`).toBe(false);
+				}
+			}
+		});
 });

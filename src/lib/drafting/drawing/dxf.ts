@@ -10,7 +10,9 @@
 import { DxfWriter, LWPolylineFlags, TextHorizontalAlignment, TextVerticalAlignment, Units, point2d, point3d } from '@tarikjabiri/dxf';
 import { add, dist, mul, pointAt, sub, tangentAt, unit, type Point, type Segment } from '../geometry';
 import type { Piece } from '../pieces';
-import type { Role } from './model';
+import { flatten } from '../outline';
+import { segRect, upright, type Rect, type Role } from './model';
+import { placeStack, stackRect, type Fit, type Stack, type StackLine } from './place';
 
 /**
  * Layer of each kind of line. ASTM D6673 numbers them; these numbers are FROM MEMORY of the AAMA/ASTM
@@ -201,6 +203,10 @@ export function piecesToDxf(input: DxfInput): string {
 	return w.stringify();
 }
 
+/** How wide a letter of a plain CAD font is, as a share of the text's em (its cap height 0.7 em): the
+ * words are placed for it, as a reader sets them in its own font (common practice; from memory). */
+export const DXF_LETTER = 0.6;
+
 /** Cap height of Lora as a share of its em, so DXF text (sized by cap height) matches the paper's. */
 const CAP_HEIGHT = 0.7;
 const r = (v: number) => Math.round(v * 1000) / 1000;
@@ -226,35 +232,70 @@ interface PieceText {
 	layer: DxfLayerKind;
 }
 
-/** The words of a piece, stacked where the engine put its labels: piece name and quantity on the
- * boundary layer as the standard's "Piece Name:" and "Quantity:" lines (FROM MEMORY), then the cut
- * instruction, the order number, notes and allowances as annotation. */
+/** A point of paper in cm at full size: the unit the word placement keeps its clearances in. */
+const PT_CM = 2.54 / 72;
+
+/** The words of a piece: piece name and quantity on the boundary layer as the standard's "Piece Name:" and
+ * "Quantity:" lines (FROM MEMORY), then the cut instruction, the order number, notes and allowances as
+ * annotation. The stack is placed by the drawing model's own rule (place.ts): inside the seam line, off
+ * the grain line and the darts, nearest the engine's place for the labels; letters as wide as a CAD font
+ * sets them (DXF_LETTER). A stack that finds no place is made smaller, then turned, before it is left where
+ * the engine put its labels. */
 export function pieceText(p: Piece, orderNumber: string, line?: number): PieceText[] {
 	const name = p.labels.find((l) => l.kind === 'name');
 	const cut = p.labels.find((l) => l.kind === 'cut');
 	const nameSize = name?.size ?? 2;
 	const small = cut?.size ?? nameSize * 0.62;
 	const angle = name?.angle ?? 0;
-	const rows: Omit<PieceText, 'at' | 'angle'>[] = [
+	const rows: (Omit<PieceText, 'at' | 'angle'> & { kind: StackLine['kind'] })[] = [
 		// As wide as the engine's name was sized to fit the piece: the standard's prefix makes it longer.
-		{ text: `Piece Name: ${p.name}`, size: nameSize * Math.min(1, (name?.text.length ?? 1) / `Piece Name: ${p.name}`.length), layer: 'boundary' },
-		{ text: `Quantity: ${p.cut.count}`, size: small, layer: 'boundary' },
-		{ text: p.fabric === 'lining' ? `${p.cutText}, lining fabric` : p.cutText, size: small, layer: 'annotation' },
-		{ text: `Order ${orderNumber}${line ? `, skirt ${line}` : ''}`, size: small, layer: 'annotation' },
-		...p.labels.filter((l) => l.kind === 'note' || l.kind === 'allowances').map((l) => ({ text: l.text, size: l.size, layer: 'annotation' as const }))
+		{ text: `Piece Name: ${p.name}`, size: nameSize * Math.min(1, (name?.text.length ?? 1) / `Piece Name: ${p.name}`.length), layer: 'boundary', kind: 'name' },
+		{ text: `Quantity: ${p.cut.count}`, size: small, layer: 'boundary', kind: 'cut' },
+		{ text: p.fabric === 'lining' ? `${p.cutText}, lining fabric` : p.cutText, size: small, layer: 'annotation', kind: 'cut' },
+		{ text: `Order ${orderNumber}${line ? `, skirt ${line}` : ''}`, size: small, layer: 'annotation', kind: 'cut' },
+		...p.labels.filter((l) => l.kind === 'note' || l.kind === 'allowances').map((l) => ({ text: l.text, size: l.size, layer: 'annotation' as const, kind: l.kind }))
 	];
 	const first = p.labels[0];
 	const last = p.labels[p.labels.length - 1];
 	const centre = first && last ? mul(add(first.at, last.at), 0.5) : { x: (p.bounds.minX + p.bounds.maxX) / 2, y: (p.bounds.minY + p.bounds.maxY) / 2 };
+	const fit: Fit = { u: PT_CM, measure: (text, size) => [...text].length * size * DXF_LETTER, readable: false };
+	const poly = flatten(p.seam.segments, 0.3);
+	const avoid: Rect[] = [
+		segRect(p.grain.from, p.grain.to, 1.5 * PT_CM),
+		...p.darts.map((d) => ({
+			x0: Math.min(d.top1.x, d.point.x, d.top2.x) - PT_CM,
+			y0: Math.min(d.top1.y, d.point.y, d.top2.y) - PT_CM,
+			x1: Math.max(d.top1.x, d.point.x, d.top2.x) + PT_CM,
+			y1: Math.max(d.top1.y, d.point.y, d.top2.y) + PT_CM
+		}))
+	];
+	const soft = p.lines.filter((l) => l.points.length >= 2).map((l) => segRect(l.points[0], l.points[l.points.length - 1], PT_CM));
+	const stackOf = (k: number, a: number): Stack => {
+		const lines = rows.map((t) => ({ text: t.text, size: t.size * k, weight: 400 as const, kind: t.kind }));
+		return { lines, angle: a, centre, rect: stackRect(fit, lines, centre, a) };
+	};
+	let placed: Stack | null = null;
+	let scale = 1;
+	search: for (const k of [1, 0.8, 0.64, 0.5, 0.4])
+		for (const a of [angle, upright(angle + 90)]) {
+			const got = placeStack(fit, stackOf(k, a), poly, [[...avoid, ...soft], avoid]);
+			if (got.clear) {
+				[placed, scale] = [got.stack, k];
+				break search;
+			}
+		}
+	const at = placed?.centre ?? centre;
+	const turn = placed?.angle ?? angle;
 	// Down the stack, turned with the text (angles clockwise, y down).
-	const rad = (angle * Math.PI) / 180;
+	const rad = (turn * Math.PI) / 180;
 	const down = { x: -Math.sin(rad), y: Math.cos(rad) };
-	const total = rows.reduce((s, t) => s + t.size * 1.35, 0);
+	const total = rows.reduce((s, t) => s + t.size * scale * 1.3, 0);
 	let run = -total / 2;
-	return rows.map((t) => {
-		const mid = run + (t.size * 1.35) / 2;
-		run += t.size * 1.35;
-		return { ...t, at: add(centre, mul(down, mid)), angle };
+	return rows.map(({ kind: _kind, ...t }) => {
+		const size = t.size * scale;
+		const mid = run + (size * 1.3) / 2;
+		run += size * 1.3;
+		return { ...t, size, at: add(at, mul(down, mid)), angle: turn };
 	});
 }
 

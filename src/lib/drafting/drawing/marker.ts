@@ -8,7 +8,7 @@ import { ptPerCm, through, type Drawing, type Mark, type Measure } from './model
 import { arrowhead, scaleBar } from './symbols';
 
 /** The band across the lay the pieces take (a piece may reach past the fold's edge when laid whole). */
-function laneOf(layout: Layout) {
+export function laneOf(layout: Layout) {
 	let [min, max] = [0, layout.laneWidth];
 	for (const p of layout.pieces)
 		for (const q of p.outline) {

@@ -6,7 +6,7 @@ import { boundsOf, flatten } from '../outline';
 import { allowanceText, type Piece } from '../pieces';
 import { formatCm, formatLength, type Units } from '../units';
 import { overlaps, segRect, upright, type Curve, type Mark, type Rect, type Tone } from './model';
-import { freeAlong, layoutStack, placeStack, type Fit, type StackLine } from './place';
+import { freeAlong, layoutStack, placeStack, stackRect, type Fit, type StackLine } from './place';
 import { dartMarks, dimension, foldBracket, grainArrow, notchTicks } from './symbols';
 
 /** Piece cm to drawing cm: a move, and for a long strip laid along the page a quarter turn. */
@@ -25,6 +25,24 @@ export interface PieceStyle extends Fit {
 	/** Where name and cut are written when the labels find no place inside the piece (else they stay
 	 * where the engine put them): the piece's box in drawing cm. */
 	caption?: { x: number; y: number; w: number; h: number };
+	/** Bands (drawing cm) the label stack keeps out of when it can, after the marks themselves: the
+	 * edges of a tiled print's pages, so no word is cut by a trim line or lies under a page's own notes;
+	 * with `wrap`, the stack's long lines are broken to that length (drawing cm) when that lets it. */
+	keepOff?: { edges: Rect[]; wrap: number };
+}
+
+/** A stack's lines broken between words so none is longer than `width` (a single longer word stays whole). */
+function wrapLines(lines: StackLine[], width: number, measure: Fit['measure']): StackLine[] {
+	return lines.flatMap((l) => {
+		if (measure(l.text, l.size, l.weight) <= width) return [l];
+		const out: string[] = [];
+		for (const word of l.text.split(' ')) {
+			const last = out[out.length - 1];
+			if (last !== undefined && measure(`${last} ${word}`, l.size, l.weight) <= width) out[out.length - 1] = `${last} ${word}`;
+			else out.push(word);
+		}
+		return out.map((text) => ({ ...l, text }));
+	});
 }
 
 /** Room kept left of and below each piece for its dimension lines, in points of paper. */
@@ -166,7 +184,24 @@ export function pieceMarks(p: Piece, f: PlaceMap, s: PieceStyle): { marks: Mark[
 		const o = sub(f({ x: 1, y: 0 }), f({ x: 0, y: 0 }));
 		const turn = (Math.atan2(o.y, o.x) * 180) / Math.PI;
 		const laid = layoutStack(s, stackLines(p, s), poly, centre, upright(first.angle + turn));
-		const placed = placeStack(s, laid, poly, [[...avoid, ...soft], avoid, avoid.slice(1)]);
+		let placed: ReturnType<typeof placeStack> | null = null;
+		if (s.keepOff) {
+			// Off the page edges first, every line kept (broken if need be, narrower and narrower for a piece
+			// that has only a strip of one page to itself); else placed as anywhere else.
+			const { edges, wrap } = s.keepOff;
+			const off = [[...avoid, ...soft, ...edges], [...avoid, ...edges], [...avoid.slice(1), ...edges]];
+			// Half as fine a search (some 1 cm steps on a skirt piece): it may run several times, each over
+			// every place when the page edges leave none.
+			const strict = { ...s, readable: false, across: 60 };
+			placed = placeStack(strict, laid, poly, off);
+			for (const k of [1, 0.6, 0.4]) {
+				if (placed.clear) break;
+				const lines = wrapLines(laid.lines, wrap * k, measure);
+				if (lines.length > laid.lines.length) placed = placeStack(strict, { ...laid, lines, rect: stackRect(s, lines, laid.centre, laid.angle) }, poly, off);
+			}
+			if (!placed.clear) placed = null;
+		}
+		placed ??= placeStack(s, laid, poly, [[...avoid, ...soft], avoid, avoid.slice(1)]);
 		clear = placed.clear;
 		const st = placed.stack;
 		if (clear || !s.caption) {

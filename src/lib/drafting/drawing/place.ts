@@ -30,6 +30,17 @@ function scanInside(poly: Point[], step: number): (p: Point) => boolean {
 	};
 }
 
+/** The scan lines of an outline, made once for every stack placed in it (a piece's words may be placed
+ * several times over, each a fresh try, in the same outline). */
+const scans = new WeakMap<Point[], Map<number, (p: Point) => boolean>>();
+function insideTest(poly: Point[], step: number): (p: Point) => boolean {
+	let byStep = scans.get(poly);
+	if (!byStep) scans.set(poly, (byStep = new Map()));
+	let test = byStep.get(step);
+	if (!test) byStep.set(step, (test = scanInside(poly, step)));
+	return test;
+}
+
 const rectInside = (isInside: (p: Point) => boolean, r: Rect) =>
 	[
 		[r.x0, r.y0],
@@ -63,6 +74,8 @@ export interface Fit {
 	u: number;
 	measure: Measure;
 	readable: boolean;
+	/** Places tried across the piece's longer side at full size (120 unless said). */
+	across?: number;
 }
 
 // Points on paper: the smallest a cutter reads at arm's length, the largest worth the room.
@@ -108,6 +121,46 @@ export function layoutStack(fit: Fit, lines0: StackLine[], poly: Point[], centre
 
 const moved = (r: Rect, dx: number, dy: number): Rect => ({ x0: r.x0 + dx, y0: r.y0 + dy, x1: r.x1 + dx, y1: r.y1 + dy });
 
+/**
+ * The offsets' indices nearest first (by the distance with the vertical counted at 0.6, ties in the order
+ * given), handed out one by one: `nth(n)` is the n-th nearest, -1 past the end. A stack mostly finds its
+ * place among the first few of some 15 000 offsets at full size, so they come off a binary heap (our own
+ * few lines) as asked for instead of being sorted all at once; the order is the same a stable sort gives.
+ */
+function nearestFirst(xs: number[], ys: number[]): (n: number) => number {
+	const size0 = xs.length;
+	const key = new Float64Array(size0);
+	for (let i = 0; i < size0; i++) key[i] = Math.hypot(xs[i], ys[i] * 0.6);
+	const heap = new Int32Array(size0);
+	for (let i = 0; i < size0; i++) heap[i] = i;
+	const before = (a: number, b: number) => key[a] < key[b] || (key[a] === key[b] && a < b);
+	let size = size0;
+	const down = (at: number) => {
+		for (;;) {
+			const l = 2 * at + 1;
+			const r = l + 1;
+			let top = at;
+			if (l < size && before(heap[l], heap[top])) top = l;
+			if (r < size && before(heap[r], heap[top])) top = r;
+			if (top === at) return;
+			const t = heap[at];
+			heap[at] = heap[top];
+			heap[top] = t;
+			at = top;
+		}
+	};
+	for (let i = (size >> 1) - 1; i >= 0; i--) down(i);
+	const taken: number[] = [];
+	return (n) => {
+		while (taken.length <= n && size > 0) {
+			taken.push(heap[0]);
+			heap[0] = heap[--size];
+			down(0);
+		}
+		return n < taken.length ? taken[n] : -1;
+	};
+}
+
 /** The nearest place to the stack's own centre where it lies inside the piece clear of the obstacles,
  * trying each set of obstacles in turn (strictest first); on a reduced print, lines the piece list also
  * carries are given up, and at last name and cut share one line, before the stack is left where it was. */
@@ -116,33 +169,53 @@ export function placeStack(fit: Fit, stack: Stack, poly: Point[], tiers: Rect[][
 	const xs = poly.map((q) => q.x);
 	const ys = poly.map((q) => q.y);
 	const box = { x0: Math.min(...xs), y0: Math.min(...ys), x1: Math.max(...xs), y1: Math.max(...ys) };
-	const isInside = scanInside(poly, u);
+	const isInside = insideTest(poly, u);
 	let lines = stack.lines;
 	for (;;) {
 		const rect = stackRect(fit, lines, stack.centre, stack.angle);
-		const offsets: [number, number][] = [[0, 0]];
+		const xs: number[] = [0];
+		const ys: number[] = [0];
 		// Five points of paper a step; at full size, no finer than 1/120 of the piece (a 70 cm piece at 1:1
 		// would otherwise try some 150 000 places; at a ticket's scales the first rule always wins).
-		const step = Math.max(5 * u, Math.max(box.x1 - box.x0, box.y1 - box.y0) / 120);
+		const step = Math.max(5 * u, Math.max(box.x1 - box.x0, box.y1 - box.y0) / (fit.across ?? 120));
 		for (let dx = box.x0 - rect.x0; dx <= box.x1 - rect.x1; dx += step)
-			for (let dy = box.y0 - rect.y0; dy <= box.y1 - rect.y1; dy += step) offsets.push([dx, dy]);
-		offsets.sort((a, b) => Math.hypot(a[0], a[1] * 0.6) - Math.hypot(b[0], b[1] * 0.6));
-		// Inside-the-piece is the costly test: made once per offset, and only for offsets clear of the marks.
-		const insideAt = new Map<number, boolean>();
-		const inside = (i: number) => {
-			let v = insideAt.get(i);
-			if (v === undefined) {
-				const r = moved(rect, offsets[i][0], offsets[i][1]);
-				insideAt.set(i, (v = rectInside(isInside, { x0: r.x0 - 3 * u, y0: r.y0 - 2 * u, x1: r.x1 + 3 * u, y1: r.y1 + 2 * u })));
+			for (let dy = box.y0 - rect.y0; dy <= box.y1 - rect.y1; dy += step) {
+				xs.push(dx);
+				ys.push(dy);
 			}
-			return v;
+		const offsets = nearestFirst(xs, ys);
+		// Inside-the-piece is the costly test: made once per offset (0 not yet, 1 in, 2 out), and only for
+		// offsets clear of the marks.
+		const insideAt = new Uint8Array(xs.length);
+		const inside = (i: number) => {
+			if (!insideAt[i]) {
+				const r = moved(rect, xs[i], ys[i]);
+				insideAt[i] = rectInside(isInside, { x0: r.x0 - 3 * u, y0: r.y0 - 2 * u, x1: r.x1 + 3 * u, y1: r.y1 + 2 * u }) ? 1 : 2;
+			}
+			return insideAt[i] === 1;
 		};
-		for (const avoid of tiers) {
-			for (let i = 0; i < offsets.length; i++) {
-				const [dx, dy] = offsets[i];
-				const r = moved(rect, dx, dy);
-				if (avoid.some((o) => overlaps(r, o, 1.5 * u)) || !inside(i)) continue;
-				return { stack: { ...stack, lines, centre: { x: stack.centre.x + dx, y: stack.centre.y + dy }, rect: r }, clear: true };
+		const pad = 1.5 * u;
+		// Every place tried lies in the piece's box or where the stack was: obstacles beyond cannot matter.
+		const reach = { x0: Math.min(box.x0, rect.x0), y0: Math.min(box.y0, rect.y0), x1: Math.max(box.x1, rect.x1), y1: Math.max(box.y1, rect.y1) };
+		for (const all of tiers) {
+			const avoid = all.filter((o) => overlaps(reach, o, pad));
+			for (let n = 0, i = offsets(0); i >= 0; i = offsets(++n)) {
+				const dx = xs[i];
+				const dy = ys[i];
+				// overlaps(moved(rect, dx, dy), o, pad) for each obstacle, written out: this runs for every
+				// offset of every tier a stack tries, and a rectangle made for each was most of its time.
+				const x0 = rect.x0 + dx;
+				const y0 = rect.y0 + dy;
+				const x1 = rect.x1 + dx;
+				const y1 = rect.y1 + dy;
+				let hit = false;
+				for (const o of avoid)
+					if (x0 < o.x1 + pad && o.x0 < x1 + pad && y0 < o.y1 + pad && o.y0 < y1 + pad) {
+						hit = true;
+						break;
+					}
+				if (hit || !inside(i)) continue;
+				return { stack: { ...stack, lines, centre: { x: stack.centre.x + dx, y: stack.centre.y + dy }, rect: moved(rect, dx, dy) }, clear: true };
 			}
 		}
 		if (!fit.readable) break;

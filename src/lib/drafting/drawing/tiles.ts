@@ -210,9 +210,10 @@ export function outlineMeets(poly: Point[], x0: number, y0: number, x1: number, 
 	return inside(poly, { x: (x0 + x1) / 2, y: (y0 + y1) / 2 });
 }
 
-/** The cutting lines of pieces in their spots, in strip cm (for page choice and maps). */
-export function stripOutlines(pieces: Pick<Piece, 'bounds' | 'cutting'>[], plan: StripPlan): Point[][] {
-	return pieces.map((p, i) => flatten(p.cutting.segments, 0.3).map(spotMap(p, plan.spots[i])));
+/** The cutting lines of pieces in their spots, in strip cm (for page choice and maps); `flat`, the
+ * pieces' cutting lines already flattened in piece cm, saves flattening them again for every plan tried. */
+export function stripOutlines(pieces: Pick<Piece, 'bounds' | 'cutting'>[], plan: StripPlan, flat = pieces.map((p) => flatten(p.cutting.segments, 0.3))): Point[][] {
+	return pieces.map((p, i) => flat[i].map(spotMap(p, plan.spots[i])));
 }
 
 /**
@@ -222,12 +223,13 @@ export function stripOutlines(pieces: Pick<Piece, 'bounds' | 'cutting'>[], plan:
  */
 export function planTiles(pieces: Pick<Piece, 'bounds' | 'cutting'>[], cellW: number, cellH: number): TilePlan | null {
 	const items = pieces.map((p, i) => itemOf(String(i), p));
+	const flat = pieces.map((p) => flatten(p.cutting.segments, 0.3));
 	let best: TilePlan | null = null;
 	for (let cols = 1; cols <= 8; cols++) {
 		const strip = packStrip(items, cols * cellW);
 		if (!strip) continue;
 		const rows = Math.max(1, Math.ceil(strip.length / cellH - 1e-9));
-		const outlines = stripOutlines(pieces, strip);
+		const outlines = stripOutlines(pieces, strip, flat);
 		const cells: Cell[] = [];
 		for (let row = 0; row < rows; row++)
 			for (let col = 0; col < cols; col++) {

@@ -4,7 +4,7 @@
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { measurementProfiles } from '../db/schema';
-import type { FitAdjustments } from '../../drafting/fit';
+import type { FitAdjustments } from '$lib/drafting/fit';
 
 export type CardRow = typeof measurementProfiles.$inferSelect;
 /** A card as the configure form saves it (cm), with the time she consented to its keeping. */

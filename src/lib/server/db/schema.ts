@@ -14,14 +14,14 @@ import {
 	varchar
 } from 'drizzle-orm/mysql-core';
 import { sql } from 'drizzle-orm';
-import { ORDER_STAGES } from '../../orders/stages';
-import type { FitAdjustments } from '../../drafting/fit';
-import type { FitAnswers } from '../../fit/report';
-import type { Figures } from '../../drafting/block';
-import type { HouseRulesInput } from '../../drafting/rules';
-import type { StyleId } from '../../drafting/options';
+import { ORDER_STAGES } from '$lib/orders/stages';
+import type { FitAdjustments } from '$lib/drafting/fit';
+import type { FitAnswers } from '$lib/fit/report';
+import type { Figures } from '$lib/drafting/block';
+import type { HouseRulesInput } from '$lib/drafting/rules';
+import type { StyleId } from '$lib/drafting/options';
 import type { Erased, LinePricing, StoredChoice, StoredMeasurements } from '../order/lines';
-import type { Layout } from '../../drafting/fabric';
+import type { Layout } from '$lib/drafting/fabric';
 
 /** Where a set of figures came from (issue: a way in without a tape measure). */
 export const FIGURE_SOURCES = ['measured', 'size_chart', 'flat_garment'] as const;

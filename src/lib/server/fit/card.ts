@@ -4,8 +4,8 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import type { Tx } from '../order/stage';
 import { measureCardChanges, measurementProfiles, orders, fitReports } from '../db/schema';
-import type { FitAdjustments } from '../../drafting/fit';
-import { CORRECTABLE, type CorrectableField } from '../../fit/report';
+import type { FitAdjustments } from '$lib/drafting/fit';
+import { CORRECTABLE, type CorrectableField } from '$lib/fit/report';
 import type { StoredMeasurements } from '../order/lines';
 
 type Reader = Pick<Db, 'select'>;

@@ -3,7 +3,7 @@
 // change where one correction keeps coming back.
 import { sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { suggestRules, type FitAnswers, FIELD_LABEL } from '../../fit/report';
+import { suggestRules, type FitAnswers, FIELD_LABEL } from '$lib/fit/report';
 import type { FitCorrection } from '../db/schema';
 
 type Rows<T> = [T[], unknown];

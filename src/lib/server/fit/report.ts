@@ -7,7 +7,7 @@ import { enqueueMail } from '../mail/outbox';
 import { reportReceivedMail } from '../mail/fit';
 import { mailSettings } from '../mail';
 import { shopSettingsOf } from '../house/rules';
-import { FIT_AREAS, FEELS, ZONES, type FitAnswers, type Feel } from '../../fit/report';
+import { FIT_AREAS, FEELS, ZONES, type FitAnswers, type Feel } from '$lib/fit/report';
 import { keepPhoto, photosOf, PHOTO_LIMITS, type PreparedPhoto } from './photos';
 
 export type Viewer = App.Locals['user'];

@@ -9,7 +9,7 @@ import { shopSettingsOf } from '../house/rules';
 import { cardFor } from './card';
 import { photosOf, purgeExpiredPhotos } from './photos';
 import { remakesUsed } from './decide';
-import { firstName } from '../../orders/names';
+import { firstName } from '$lib/orders/names';
 
 type Event = Parameters<typeof requireRole>[0];
 

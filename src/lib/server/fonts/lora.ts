@@ -6,6 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
+import PDFDocument from 'pdfkit';
 import { woffToSfnt } from './woff.js';
 
 export type Weight = 400 | 600;
@@ -58,22 +59,89 @@ function load(): Face {
 
 const fontName = (subset: Subset, weight: Weight) => `lora-${subset}-${weight}`;
 
-/** Registers every subset of Lora 400 and 600 with a document (only the ones used get embedded). */
+/** The faces parsed once per process. pdfkit 0.20 takes an already parsed font where it takes a file, and
+ * parsing is what a document paid most for: every new document read the face's tables again and shaped
+ * every word from cold caches. They are parsed by pdfkit's own font reader, in a document that is never
+ * written, so no second copy of the reader is needed. A parsed face is shared safely: each document keeps
+ * its own subset of the glyphs it uses, and all use of a face is synchronous. */
+let parsed: Map<string, unknown> | null = null;
+
+/** What is used here of a face parsed by pdfkit's font reader (fontkit). */
+interface ParsedFace {
+	characterSet: number[];
+	glyphForCodePoint(code: number): unknown;
+}
+
+function parsedFaces(): Map<string, unknown> {
+	if (parsed) return parsed;
+	const reader = new PDFDocument({ autoFirstPage: false, font: null as unknown as string });
+	const out = new Map<string, unknown>();
+	for (const [name, data] of load().files) {
+		reader.registerFont(name, data);
+		reader.font(name);
+		const face = (reader as unknown as { _font: { font: ParsedFace } })._font.font;
+		// A face keeps each glyph with the characters it was first met for, and the PDF's text layer
+		// (copy, search, text extraction) is written from those. Met first as a part of another glyph
+		// while one document's subset is written, a glyph would keep no character for every later
+		// document: so every character's glyph is met here first, by its character.
+		for (const code of face.characterSet) face.glyphForCodePoint(code);
+		out.set(name, face);
+	}
+	parsed = out;
+	return out;
+}
+
+/** Words shaped once per process, per face. pdfkit shapes each word (kerning and ligatures) and keeps the
+ * result in a per-document table; documents here set the same words again and again (piece names, cut
+ * instructions, page headers), so every document is given the same table. A shaped word is only read
+ * afterwards, never changed. Started afresh past a size, so names typed by shoppers cannot grow it without
+ * end. */
+const shaped = new Map<string, Record<string, unknown>>();
+const MAX_SHAPED = 20_000;
+/** Documents since the tables' sizes were last counted (counting is not free; a document adds few words). */
+let sinceCounted = 0;
+
+function shapedFor(name: string, count: boolean): Record<string, unknown> {
+	let table = shaped.get(name);
+	if (!table || (count && Object.keys(table).length > MAX_SHAPED)) shaped.set(name, (table = Object.create(null) as Record<string, unknown>));
+	return table;
+}
+
+/** Registers every subset of Lora 400 and 600 with a document (only the ones used get embedded: pdfkit
+ * writes a face into the file only when a page sets text in it). */
 export function registerLora(doc: PDFKit.PDFDocument) {
-	for (const [name, data] of load().files) doc.registerFont(name, data);
+	const open = doc as unknown as { _font: { layoutCache?: Record<string, unknown> } };
+	const count = ++sinceCounted >= 100;
+	if (count) sinceCounted = 0;
+	for (const [name, face] of parsedFaces()) {
+		doc.registerFont(name, face as Buffer);
+		doc.font(name);
+		if (open._font.layoutCache) open._font.layoutCache = shapedFor(name, count);
+	}
 	doc.font(fontName('latin', 400));
 }
 
+/** Each character's subset, looked up in the ranges once (every letter of every document passes here). */
+const subsetOfCode = new Map<number, Subset>();
+
 function subsetOf(code: number): Subset {
+	const known = subsetOfCode.get(code);
+	if (known) return known;
 	const { ranges } = load();
-	for (const s of SUBSETS) {
-		if (ranges.get(s)?.some(([a, b]) => code >= a && code <= b)) return s;
-	}
-	return 'latin';
+	const s = SUBSETS.find((s) => ranges.get(s)?.some(([a, b]) => code >= a && code <= b)) ?? 'latin';
+	subsetOfCode.set(code, s);
+	return s;
 }
 
+/** Runs already cut, by weight and text (the same words come back on every page); started afresh past a size. */
+const cut = new Map<string, readonly { text: string; font: string }[]>();
+const MAX_CUT = 20_000;
+
 /** The text cut into runs, each with the font that draws it. */
-export function runsOf(text: string, weight: Weight): { text: string; font: string }[] {
+export function runsOf(text: string, weight: Weight): readonly { text: string; font: string }[] {
+	const key = `${weight}|${text}`;
+	const known = cut.get(key);
+	if (known) return known;
 	const runs: { text: string; font: string }[] = [];
 	for (const ch of text) {
 		const code = ch.codePointAt(0)!;
@@ -82,6 +150,8 @@ export function runsOf(text: string, weight: Weight): { text: string; font: stri
 		if (last && last.font === font) last.text += ch;
 		else runs.push({ text: ch, font });
 	}
+	if (cut.size >= MAX_CUT) cut.clear();
+	cut.set(key, runs);
 	return runs;
 }
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DraftInputError, resolveRules } from '../../drafting';
+import { DraftInputError, resolveRules } from '$lib/drafting';
 import { rulesFromForm } from './rules-form';
 
 describe('house rules form: the lay fields', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DraftInputError, draftSkirt, resolveRules } from '../../drafting';
-import { DEFAULT_RULES } from '../../drafting/rules';
+import { DraftInputError, draftSkirt, resolveRules } from '$lib/drafting';
+import { DEFAULT_RULES } from '$lib/drafting/rules';
 import { RULE_FIELDS, ruleFormProblems, rulesFromForm } from './rules-form';
 
 describe('house rules form: the knee and the dart rules', () => {

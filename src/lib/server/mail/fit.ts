@@ -1,6 +1,6 @@
 // The fit loop's mails, in the words of its pages ("Tell us how it fits", "Remake", "Alteration").
 import { layout } from './templates';
-import { ANSWER_TIME, REPORT_RECEIVED, cardWords, decisionLead, photoWords, remakeOfWords, sentWords, wishWords } from '../../fit/words';
+import { ANSWER_TIME, REPORT_RECEIVED, cardWords, decisionLead, photoWords, remakeOfWords, sentWords, wishWords } from '$lib/fit/words';
 
 const firstName = (name: string) => name.trim().split(/\s+/)[0] ?? name;
 

@@ -1,6 +1,6 @@
 // A fabric row as the lay engine sees it, and whether a stored cutter's lay still fits it.
 import type { fabrics, StoredCutterLay } from '../db/schema';
-import type { FabricOptions } from '../../drafting';
+import type { FabricOptions } from '$lib/drafting';
 
 type ClothFacts = Pick<typeof fabrics.$inferSelect, 'widthCm' | 'nap' | 'shrinkagePct' | 'shrinkageAcrossPct'>;
 

@@ -5,8 +5,8 @@ import { asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { db } from '../db';
 import { fabrics, houseRules, orderLines, orders, type StoredCutterLay } from '../db/schema';
-import { redraftLine } from '../ticket/ticket';
-import { cutterLayInSlices, DraftInputError } from '../../drafting';
+import { redraftLine } from '../outputs/ticket';
+import { cutterLayInSlices, DraftInputError } from '$lib/drafting';
 import { clothOf, cutterLayFits } from './cloth';
 
 const pause = () => new Promise<void>((resolve) => setImmediate(resolve));

@@ -18,10 +18,10 @@ import {
 	type Role
 } from '../db/schema';
 import { moveLocked, MoveRefused, type Actor } from './stage';
-import { redraftLine } from '../ticket/ticket';
-import { combinedLayInSlices, DraftInputError, type LayOrder, type Layout } from '../../drafting';
-import { canMove, STAGE_LABELS } from '../../orders/stages';
-import { formatMetres } from '../../format';
+import { redraftLine } from '../outputs/ticket';
+import { combinedLayInSlices, DraftInputError, type LayOrder, type Layout } from '$lib/drafting';
+import { canMove, STAGE_LABELS } from '$lib/orders/stages';
+import { formatMetres } from '$lib/format';
 import { clothOf, cutterLayFits } from './cloth';
 
 /** Most orders one combined lay takes (a six-order lay searches for about four seconds). */

@@ -1,10 +1,10 @@
 // The pieces of the full-scale files: one pdfkit document with Lora embedded, the pieces as the drawing
 // model's marks in centimetres of the strip, and the test square every full-scale page is checked by.
 import PDFDocument from 'pdfkit';
-import type { Piece } from '../../drafting';
-import { PALETTE, ptPerCm, type Mark, type Rect, type Tone } from '../../drafting/drawing/model';
-import { pieceMarks } from '../../drafting/drawing/piece';
-import { spotMap, type StripPlan } from '../../drafting/drawing/tiles';
+import type { Piece } from '$lib/drafting';
+import { PALETTE, ptPerCm, type Mark, type Rect, type Tone } from '$lib/drafting/drawing/model';
+import { pieceMarks } from '$lib/drafting/drawing/piece';
+import { spotMap, type StripPlan } from '$lib/drafting/drawing/tiles';
 import { pdfMeasure } from '../ticket/draw-pdf';
 import { registerLora } from '../fonts/lora';
 import { line } from '../ticket/text';
@@ -55,11 +55,11 @@ export const FULL_SIZE_WORDS = 2.5;
  * Every piece in its spot on the strip as marks in strip cm. `scale` enlarges the words and symbols
  * (a projected pattern is read from a metre or more away).
  */
-export function stripMarks(doc: Doc, pieces: SourcePiece[], plan: StripPlan, number: string, scale = FULL_SIZE_WORDS): Mark[][] {
+export function stripMarks(doc: Doc, pieces: SourcePiece[], plan: StripPlan, number: string, scale = FULL_SIZE_WORDS, keepOff?: { edges: Rect[]; wrap: number }): Mark[][] {
 	const measure = pdfMeasure(doc);
 	return pieces.map((sp, i) => {
 		const map = spotMap(sp.piece, plan.spots[i]);
-		return pieceMarks(labelled(sp, number), map, { u: scale / K, measure, readable: true, units: 'cm', notchLabels: true }).marks;
+		return pieceMarks(labelled(sp, number), map, { u: scale / K, measure, readable: true, units: 'cm', notchLabels: true, keepOff }).marks;
 	});
 }
 

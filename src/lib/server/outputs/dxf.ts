@@ -1,6 +1,6 @@
 // The open DXF of one order: every piece of every skirt on the order, as the pure writer in
 // src/lib/drafting/drawing/dxf.ts lays it out (ASTM D6673 layers, millimetres).
-import { piecesToDxf } from '../../drafting/drawing/dxf';
+import { piecesToDxf } from '$lib/drafting/drawing/dxf';
 import type { Db } from '../db/client';
 import { loadOrderDrafts } from './order-drafts';
 import { safeName } from './problem';

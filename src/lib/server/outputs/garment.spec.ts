@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import sharp from 'sharp';
-import { draftSkirt } from '../../drafting';
-import { garmentView } from '../../drafting/drawing/garment';
+import { draftSkirt } from '$lib/drafting';
+import { garmentView } from '$lib/drafting/drawing/garment';
 import { garmentPng } from './garment';
 
 describe('the garment drawing as a PNG for mail', () => {

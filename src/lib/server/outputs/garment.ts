@@ -10,10 +10,10 @@ import sharp from 'sharp';
 import { asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { fabrics, orderLines, orders } from '../db/schema';
-import { draftSkirt, type Draft, type FitAdjustments, type Measurements, type SkirtChoiceInput } from '../../drafting';
-import { garmentView, type GarmentCloth } from '../../drafting/drawing/garment';
-import { drawingToSvg } from '../../drafting/svg';
-import type { Units } from '../../drafting/units';
+import { draftSkirt, type Draft, type FitAdjustments, type Measurements, type SkirtChoiceInput } from '$lib/drafting';
+import { garmentView, type GarmentCloth } from '$lib/drafting/drawing/garment';
+import { drawingToSvg } from '$lib/drafting/svg';
+import type { Units } from '$lib/drafting/units';
 import { rulesVersion } from '../house/rules';
 
 type FabricRow = { name: string; colour: string; swatchHex: string; imageUploadId: number | null };

@@ -1,11 +1,11 @@
 // The lay at full size: a marker printed on a roll as wide as the cloth (or as the folded cloth) to lay on
 // top of it and cut through. The cloth runs down the page: x across the cloth from the fold (or the
 // near selvedge), y along it from the start of the lay. One page per skirt of the order.
-import { labelPoint } from '../../drafting/drawing/marker';
-import { PALETTE, through, type Mark } from '../../drafting/drawing/model';
-import { arrowhead } from '../../drafting/drawing/symbols';
-import type { Layout } from '../../drafting/fabric';
-import { formatCm } from '../../drafting/units';
+import { labelPoint, laneOf } from '$lib/drafting/drawing/marker';
+import { PALETTE, through, type Mark } from '$lib/drafting/drawing/model';
+import { arrowhead } from '$lib/drafting/drawing/symbols';
+import type { Layout } from '$lib/drafting/fabric';
+import { formatCm } from '$lib/drafting/units';
 import { drawMarks } from '../ticket/draw-pdf';
 import { line } from '../ticket/text';
 import { K, newDoc, testSquare, type Doc } from './doc';
@@ -17,17 +17,6 @@ const RIGHT = 4;
 /** The band above the lay for its title and the test square, and below it for the end, cm. */
 const HEAD = 16;
 const FOOT = 6;
-
-/** The band across the cloth the pieces take (a piece laid whole may reach past the fold's line). */
-function laneOf(layout: Layout) {
-	let [min, max] = [0, layout.laneWidth];
-	for (const p of layout.pieces)
-		for (const q of p.outline) {
-			min = Math.min(min, q.x);
-			max = Math.max(max, q.x);
-		}
-	return { min, max };
-}
 
 /** The lay's marks in cm with the cloth's corner at (0, 0). */
 export function layMarks(layout: Layout): Mark[] {

@@ -2,10 +2,10 @@
 // every output shows the same pieces as the ticket), for the full-scale outputs. Refuses, with a reason,
 // an order that is not there, has no skirt to draft, or is of a style the atelier has retired.
 import { asc, eq } from 'drizzle-orm';
-import { DraftInputError, type Draft } from '../../drafting';
+import { DraftInputError, type Draft } from '$lib/drafting';
 import type { Db } from '../db/client';
 import { fabrics, houseRules, orderLines, orders, styles } from '../db/schema';
-import { redraftLine } from '../ticket/ticket';
+import { redraftLine } from './ticket';
 import { OutputProblem } from './problem';
 
 export interface OrderDrafts {

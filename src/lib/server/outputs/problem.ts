@@ -2,7 +2,7 @@
 // an order (or a draft) that is not there, 422 for stored figures that no longer draft (as the ticket
 // answers). Thrown, so a producer deep in the drafting can stop at once; anything else thrown while
 // producing is a fault of ours.
-import { failure, failureBody, type Failure } from '../../failure';
+import { failure, failureBody, type Failure } from '$lib/failure';
 
 export class OutputProblem extends Error {
 	readonly failure: Failure;

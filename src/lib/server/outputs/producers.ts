@@ -1,11 +1,11 @@
 // The files a background job can make for each order, by kind. A producer takes one order and gives
 // one file, or throws OutputProblem saying why it cannot. New outputs (the full-scale PDFs) plug in here
 // by kind; the job runner knows nothing of what they draw.
-import { DraftInputError } from '../../drafting';
+import { DraftInputError } from '$lib/drafting';
 import type { Db } from '../db/client';
 import { siteOrigin } from '../origin';
 import { shopSettingsOf } from '../house/rules';
-import { loadTickets } from '../ticket/load';
+import { loadTickets } from './ticket-load';
 import { renderTickets } from '../ticket/pdf';
 import { produceDxf } from './dxf';
 import { produceLayPdf, producePatternPdf } from './index';

@@ -1,12 +1,17 @@
-// Full-size pieces on large paper: an A0 sheet (more sheets when the pieces need them), a plotter roll
-// of a given width, or the projector file (one page, light lines on a dark ground under a numbered 5 cm
-// grid, to be projected onto the cloth on a cutting table).
-import { PALETTE } from '../../drafting/drawing/model';
-import { itemOf, narrowestStrip, packSheets, type StripPlan } from '../../drafting/drawing/tiles';
+// Full-size pieces on large paper, always one page: an A0 sheet, a plotter roll of a given width, or the
+// projector file (light lines on a dark ground under a numbered 5 cm grid, to be projected onto the cloth
+// on a cutting table). Pieces that do not all fit one A0 sheet are refused with the way out (the roll, or
+// a tiled print): a copy shop prints a file page by page, and a second sheet would be a second pattern to
+// line up by eye with no alignment marks.
+import { PALETTE } from '$lib/drafting/drawing/model';
+import type { Piece } from '$lib/drafting';
+import { itemOf, narrowestStrip, packSheets, type StripPlan } from '$lib/drafting/drawing/tiles';
 import { drawMarks, type Look } from '../ticket/draw-pdf';
 import { MM, line } from '../ticket/text';
 import { DARK, K, newDoc, stripMarks, testSquare, type Doc } from './doc';
+import type { Db } from '../db/client';
 import { OutputError } from './errors';
+import { loadOrderDrafts } from './order-drafts';
 import type { PatternSource } from './source';
 
 /** A0, 841 × 1189 mm (ISO 216). */
@@ -20,10 +25,24 @@ export const MAX_ROLL_CM = 300;
 /** The projector's page: as wide as a large cutting mat (120 cm, common practice), as long as needed. */
 export const PROJECTOR_WIDTH = 120;
 
-const items = (src: PatternSource) => src.pieces.map((sp, i) => itemOf(String(i), sp.piece));
+const items = (pieces: Pick<Piece, 'bounds'>[]) => pieces.map((p, i) => itemOf(String(i), p));
+const piecesOf = (src: PatternSource) => src.pieces.map((sp) => sp.piece);
+
+/** The pieces on one A0 sheet, upright when they fit so, else on its side; null when they do not all fit
+ * one sheet either way. */
+export function a0Plan(pieces: Pick<Piece, 'bounds'>[]): { plan: StripPlan; landscape: boolean } | null {
+	const one = (w: number, h: number) => {
+		const sheets = packSheets(items(pieces), w - 2 * EDGE, h - 2 * EDGE - HEAD);
+		return sheets && sheets.length === 1 ? sheets[0] : null;
+	};
+	const up = one(A0.w, A0.h);
+	if (up) return { plan: up, landscape: false };
+	const side = one(A0.h, A0.w);
+	return side ? { plan: side, landscape: true } : null;
+}
 
 /** The narrowest roll the pieces fit on, one piece turned to its narrower side (cm). */
-export const narrowestRoll = (src: PatternSource) => narrowestStrip(items(src)) + 2 * EDGE;
+export const narrowestRoll = (src: PatternSource) => narrowestStrip(items(piecesOf(src))) + 2 * EDGE;
 
 /** The piece that sets the narrowest roll, by name. */
 function widestPiece(src: PatternSource): string {
@@ -43,11 +62,11 @@ export function checkRollWidth(src: PatternSource, width: number) {
 
 type Kind = 'a0' | 'roll' | 'projector';
 
-function header(doc: Doc, src: PatternSource, kind: Kind, w: number, sheet: number, sheets: number, look: Look) {
+function header(doc: Doc, src: PatternSource, kind: Kind, w: number, look: Look) {
 	const ink = look.palette?.ink ?? PALETTE.ink;
 	const x = EDGE * K;
 	const what = kind === 'a0' ? 'on A0' : kind === 'roll' ? `on a ${w} cm roll` : 'for a projector';
-	line(doc, `${src.number} · Full-size pattern ${what}${sheets > 1 ? ` · sheet ${sheet} of ${sheets}` : ''}`, x, EDGE * K + 22, { size: 22, weight: 600, color: ink });
+	line(doc, `${src.number} · Full-size pattern ${what}`, x, EDGE * K + 22, { size: 22, weight: 600, color: ink });
 	line(doc, 'Scale 1:1, centimetres. Print or project at 100 %, no scaling; measure the square first.', x, EDGE * K + 44, { size: 12, color: ink });
 	const pieces = src.pieces.map((sp) => `${sp.piece.name}: ${sp.piece.cutText}`).join(' · ');
 	line(doc, pieces, x, EDGE * K + 62, { size: 10, color: ink, maxWidth: (w - 2 * EDGE - 14) * K });
@@ -93,51 +112,53 @@ const LOOKS: Record<Kind, Look> = {
 	projector: { palette: DARK, widen: { cutting: 4, seam: 2, grain: 2, notch: 2.5, dart: 2, fold: 2 } }
 };
 
-/** The single-page (or A0 multi-sheet) PDF of an order's pieces at full size. */
+/** The one-page PDF of an order's pieces at full size. */
 export async function renderSheet(src: PatternSource, kind: Kind, rollWidth?: number): Promise<{ bytes: Uint8Array; pages: number }> {
 	let pageW: number;
-	let sheets: StripPlan[] | null;
+	let pageH: number;
+	let plan: StripPlan;
 	if (kind === 'a0') {
-		// Upright or on its side, whichever takes fewer sheets.
-		const up = packSheets(items(src), A0.w - 2 * EDGE, A0.h - 2 * EDGE - HEAD);
-		const side = packSheets(items(src), A0.h - 2 * EDGE, A0.w - 2 * EDGE - HEAD);
-		const best = [up, side].filter((s) => s !== null).sort((a, b) => a!.length - b!.length)[0] ?? null;
-		if (!best) throw new OutputError(400, 'A piece is larger than an A0 sheet: choose the roll or a tiled print.');
-		sheets = best;
-		pageW = best === up ? A0.w : A0.h;
+		const a0 = a0Plan(piecesOf(src));
+		if (!a0)
+			throw new OutputError(
+				400,
+				`The pieces of ${src.number} do not all fit on one A0 sheet (84.1 × 118.9 cm) at full size: print them on the plotter roll (one page as long as they need) or tiled on A4 or Letter.`
+			);
+		plan = a0.plan;
+		[pageW, pageH] = a0.landscape ? [A0.h, A0.w] : [A0.w, A0.h];
 	} else {
 		pageW = kind === 'roll' ? rollWidth! : Math.max(PROJECTOR_WIDTH, Math.ceil(narrowestRoll(src)));
 		if (kind === 'roll') checkRollWidth(src, pageW);
-		const one = packSheets(items(src), pageW - 2 * EDGE);
+		const one = packSheets(items(piecesOf(src)), pageW - 2 * EDGE);
 		if (!one) throw new OutputError(400, 'The pieces do not fit this width.');
-		sheets = one;
+		plan = one[0];
+		pageH = Math.ceil(HEAD + plan.length + 2 * EDGE);
 	}
 	const look = LOOKS[kind];
 	const { doc, done } = newDoc(`Full-size pattern ${src.number} (${kind === 'a0' ? 'A0' : kind === 'roll' ? `${pageW} cm roll` : 'projector'})`, 'Full-size pattern', src.number);
-	const words = kind === 'projector' ? 4 : undefined;
-	sheets.forEach((plan, s) => {
-		const pageH = kind === 'a0' ? (pageW === A0.w ? A0.h : A0.w) : Math.ceil(HEAD + plan.length + 2 * EDGE);
-		doc.addPage({ size: [pageW * K, pageH * K], margin: 0 });
-		if (look.palette) doc.rect(0, 0, pageW * K, pageH * K).fill(look.palette.paper);
-		if (kind === 'projector') grid(doc, pageW, pageH);
-		header(doc, src, kind, pageW, s + 1, sheets.length, look);
-		// Only this sheet's pieces (the spots of the others' are holes).
-		const here = src.pieces.map((sp, i) => (plan.spots[i] ? i : -1)).filter((i) => i >= 0);
-		const marks = stripMarks(
-			doc,
-			here.map((i) => src.pieces[i]),
-			{ ...plan, spots: here.map((i) => plan.spots[i]) },
-			src.number,
-			words
-		);
-		const map = { k: K, ox: EDGE * K, oy: (EDGE + HEAD) * K };
-		for (const m of marks) drawMarks(doc, m, map, look);
-		line(doc, `${src.number} · scale 1:1, centimetres${sheets.length > 1 ? ` · sheet ${s + 1} of ${sheets.length}` : ''}`, (pageW * K) / 2, pageH * K - 8 * MM, {
-			size: 10,
-			align: 'center',
-			color: look.palette?.pencil ?? PALETTE.pencil
-		});
+	doc.addPage({ size: [pageW * K, pageH * K], margin: 0 });
+	if (look.palette) doc.rect(0, 0, pageW * K, pageH * K).fill(look.palette.paper);
+	if (kind === 'projector') grid(doc, pageW, pageH);
+	header(doc, src, kind, pageW, look);
+	const marks = stripMarks(doc, src.pieces, plan, src.number, kind === 'projector' ? 4 : undefined);
+	const map = { k: K, ox: EDGE * K, oy: (EDGE + HEAD) * K };
+	for (const m of marks) drawMarks(doc, m, map, look);
+	line(doc, `${src.number} · scale 1:1, centimetres`, (pageW * K) / 2, pageH * K - 8 * MM, {
+		size: 10,
+		align: 'center',
+		color: look.palette?.pencil ?? PALETTE.pencil
 	});
 	doc.end();
-	return { bytes: await done, pages: sheets.length };
+	return { bytes: await done, pages: 1 };
+}
+
+/** Whether an order's pieces all fit one A0 sheet, for the order page to say so before a download;
+ * null when the order cannot be drafted (the download then says why). */
+export async function a0FitsOrder(db: Db, orderId: number): Promise<boolean | null> {
+	try {
+		const order = await loadOrderDrafts(db, orderId);
+		return a0Plan(order.lines.flatMap((l) => l.draft.pieces)) !== null;
+	} catch {
+		return null;
+	}
 }

@@ -2,13 +2,13 @@
 // cutting ticket is (same house rules version, same stored measurements), so the ticket, the tiled print,
 // the roll, the projector file and the lay all show the same pieces.
 import { eq } from 'drizzle-orm';
-import { DraftInputError, type Piece } from '../../drafting';
-import type { Layout } from '../../drafting/fabric';
-import { cutterLay } from '../../drafting/nest/cutter';
+import { DraftInputError, type Piece } from '$lib/drafting';
+import type { Layout } from '$lib/drafting/fabric';
+import { cutterLay } from '$lib/drafting/nest/cutter';
 import type { Db } from '../db/client';
 import { orderLines, orders, styles } from '../db/schema';
-import { loadTickets } from '../ticket/load';
-import type { Ticket } from '../ticket/ticket';
+import { loadTickets } from './ticket-load';
+import type { Ticket } from './ticket';
 import { OutputError } from './errors';
 
 /** One piece to print, with the order line it belongs to. */

@@ -3,9 +3,9 @@
 // cell of the sheet's grid (row letter, column number), showing a strip of the neighbouring cells past
 // its trim line, so a page trimmed on its left and top edges laps over its neighbours with the circles
 // on the trim lines matching.
-import { PALETTE } from '../../drafting/drawing/model';
-import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '../../drafting/drawing/tiles';
-import { flatten } from '../../drafting/outline';
+import { PALETTE, type Rect } from '$lib/drafting/drawing/model';
+import { cellName, planTiles, spotMap, type Cell, type TilePlan } from '$lib/drafting/drawing/tiles';
+import { flatten } from '$lib/drafting/outline';
 import { drawMarks } from '../ticket/draw-pdf';
 import { MM, line } from '../ticket/text';
 import { K, boxed, newDoc, stripMarks, testSquare, type BoxedMark, type Doc } from './doc';
@@ -132,16 +132,59 @@ function footer(doc: Doc, src: PatternSource, w: number, h: number, page: number
 	});
 }
 
-/** Alignment circle with a cross, centred on a trim line. */
-function target(doc: Doc, x: number, y: number) {
-	const r = 3 * MM;
-	doc.save().lineWidth(0.5).strokeColor(PALETTE.ink);
-	doc.circle(x, y, r).stroke();
-	doc.moveTo(x - 1.6 * r, y).lineTo(x + 1.6 * r, y).moveTo(x, y - 1.6 * r).lineTo(x, y + 1.6 * r).stroke();
-	doc.restore();
+/** Radius of an alignment circle; its cross reaches 1.6 times as far. */
+const TARGET_R = 3 * MM;
+
+/** pdfkit's own number form in content streams: at most six decimals. */
+const num = (v: number) => String(Math.round(v * 1e6) / 1e6);
+
+/**
+ * The alignment circle with its cross, written once per document as a PDF form (ISO 32000-1, 8.10) and
+ * placed on each page by its centre. Every page has up to eight, and drawn out each time they were
+ * most of a page's path data, which the document then compresses. pdfkit has no call for a form, so
+ * its few operators are written here: the circle as pdfkit draws one (four Bézier quarters, k = 0.5523),
+ * the pen as `targets` used to set it.
+ */
+function targetForm(doc: Doc): PDFKit.PDFKitReference {
+	const known = forms.get(doc);
+	if (known) return known;
+	const r = TARGET_R;
+	const o = r * (4 * ((Math.SQRT2 - 1) / 3));
+	const [red, green, blue] = [1, 3, 5].map((i) => parseInt(PALETTE.ink.slice(i, i + 2), 16) / 255);
+	const ops = [
+		'0.5 w',
+		'/DeviceRGB CS',
+		`${red} ${green} ${blue} SCN`,
+		`${num(-r)} 0 m`,
+		`${num(-r)} ${num(-o)} ${num(-o)} ${num(-r)} 0 ${num(-r)} c`,
+		`${num(o)} ${num(-r)} ${num(r)} ${num(-o)} ${num(r)} 0 c`,
+		`${num(r)} ${num(o)} ${num(o)} ${num(r)} 0 ${num(r)} c`,
+		`${num(-o)} ${num(r)} ${num(-r)} ${num(o)} ${num(-r)} 0 c`,
+		'h',
+		'S',
+		`${num(-1.6 * r)} 0 m`,
+		`${num(1.6 * r)} 0 l`,
+		`0 ${num(-1.6 * r)} m`,
+		`0 ${num(1.6 * r)} l`,
+		'S'
+	];
+	const reach = 1.6 * r + 1;
+	const form = doc.ref({ Type: 'XObject', Subtype: 'Form', BBox: [-reach, -reach, reach, reach], Resources: {} });
+	form.end(ops.join('\n'));
+	forms.set(doc, form);
+	return form;
+}
+const forms = new WeakMap<Doc, PDFKit.PDFKitReference>();
+
+/** Alignment circles with a cross, centred on the trim lines. */
+function targets(doc: Doc, at: [number, number][]) {
+	if (!at.length) return;
+	const page = (doc as unknown as { page: { xobjects: Record<string, PDFKit.PDFKitReference> } }).page;
+	page.xobjects.QLTarget = targetForm(doc);
+	for (const [x, y] of at) doc.addContent(`q 1 0 0 1 ${num(x)} ${num(y)} cm /QLTarget Do Q`);
 }
 
-function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], index: number) {
+function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan, landscape: boolean, marks: BoxedMark[], printed: Map<string, number>, index: number) {
 	const c = plan.cells[index];
 	const [pw, ph] = pageName(paper, landscape);
 	doc.addPage({ size: [pw, ph], margin: 0 });
@@ -170,10 +213,10 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 	// The trim line round the cell: drawn over the pieces so it is whole (the scale test finds it).
 	doc.save().rect(left, top, cw, ch).lineWidth(1).strokeColor(PALETTE.pencil).stroke().restore();
 	// Circles on every edge shared with another printed page, and that page's name beside them.
-	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
 	const near = (dr: number, dc: number) => printed.get(`${c.row + dr}:${c.col + dc}`);
 	const note = (s: string, x: number, y: number, align: 'left' | 'center' | 'right') =>
 		line(doc, s, x, y, { size: 6.5, align, color: PALETTE.pencil });
+	const circles: [number, number][] = [];
 	for (const [dr, dc] of [
 		[0, -1],
 		[0, 1],
@@ -185,24 +228,44 @@ function tilePage(doc: Doc, src: PatternSource, paper: TilePaper, plan: TilePlan
 		const other = `${cellName(plan.cells[j])} (p. ${j + 2})`;
 		if (dc !== 0) {
 			const x = dc < 0 ? left : left + cw;
-			for (const f of [0.25, 0.75]) target(doc, x, top + ch * f);
+			for (const f of [0.25, 0.75]) circles.push([x, top + ch * f]);
 			note(`joins ${other}`, dc < 0 ? x + 12 : x - 12, top + ch * 0.5, dc < 0 ? 'left' : 'right');
 		} else {
 			const y = dr < 0 ? top : top + ch;
-			for (const f of [0.25, 0.75]) target(doc, left + cw * f, y);
+			for (const f of [0.25, 0.75]) circles.push([left + cw * f, y]);
 			note(`joins ${other}`, left + cw * 0.5, dr < 0 ? y + 14 : y - 8, 'center');
 		}
 	}
+	targets(doc, circles);
 	footer(doc, src, pw, ph, index + 2, pages);
 }
+
+/** How far (cm) either side of a page edge the piece names keep clear when they can: the trim line, its
+ * circles (4.8 mm) and the page's "joins" notes lie there, and a name split over two pages reads badly. */
+const EDGE_BAND = 1.2;
+
+/** The bands round the edges between the sheet's cells, in strip cm. */
+function pageEdges(plan: TilePlan): Rect[] {
+	const [w, h] = [plan.cols * plan.cellW, plan.rows * plan.cellH];
+	const out: Rect[] = [];
+	for (let c = 1; c < plan.cols; c++) out.push({ x0: c * plan.cellW - EDGE_BAND, y0: 0, x1: c * plan.cellW + EDGE_BAND, y1: h });
+	for (let r = 1; r < plan.rows; r++) out.push({ x0: 0, y0: r * plan.cellH - EDGE_BAND, x1: w, y1: r * plan.cellH + EDGE_BAND });
+	return out;
+}
+
+/** Every piece's marks on the tiled sheet, in strip cm, its words kept off the page edges when they can. */
+export const tiledMarks = (doc: Doc, src: PatternSource, plan: TilePlan) =>
+	stripMarks(doc, src.pieces, plan.strip, src.number, undefined, { edges: pageEdges(plan), wrap: Math.min(plan.cellW, plan.cellH) - 2 * EDGE_BAND - 1 });
 
 /** The tiled PDF of an order's pieces. */
 export async function renderTiled(src: PatternSource, paper: TilePaper): Promise<{ bytes: Uint8Array; pages: number; plan: TilePlan; landscape: boolean }> {
 	const { plan, landscape } = tilePlanFor(src, paper);
 	const { doc, done } = newDoc(`Full-size pattern ${src.number} (${TILE_PAPER[paper].name}, tiled)`, 'Full-size pattern', src.number);
 	coverPage(doc, src, paper, plan, landscape);
-	const marks = boxed(stripMarks(doc, src.pieces, plan.strip, src.number).flat());
-	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, i));
+	const marks = boxed(tiledMarks(doc, src, plan).flat());
+	// Which cell is printed on which page, to name a page's neighbours.
+	const printed = new Map(plan.cells.map((q, i) => [`${q.row}:${q.col}`, i]));
+	plan.cells.forEach((_, i) => tilePage(doc, src, paper, plan, landscape, marks, printed, i));
 	doc.end();
 	return { bytes: await done, pages: plan.cells.length + 1, plan, landscape };
 }

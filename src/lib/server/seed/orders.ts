@@ -1,6 +1,6 @@
 // Invented demo orders, at least one in every stage, each drafted by the real engine so the
 // workroom's figures and tickets are the ones the product would have computed.
-import { MAIN_PATH, type OrderStage } from '../../orders/stages';
+import { MAIN_PATH, type OrderStage } from '$lib/orders/stages';
 
 export type DemoOrder = {
 	number: string;

@@ -1,6 +1,6 @@
 // The drawing model's back end for pdfkit: marks in cm of the drawing onto the page at k points a cm,
 // with the print pens (widths in points whatever the scale). Nothing is decided here but strokes.
-import { PALETTE, PENS, type Curve, type Mark, type Measure, type Role, type Tone } from '../../drafting/drawing/model';
+import { PALETTE, PENS, type Curve, type Mark, type Measure, type Role, type Tone } from '$lib/drafting/drawing/model';
 import { line, widthOf } from './text';
 
 type Doc = PDFKit.PDFDocument;

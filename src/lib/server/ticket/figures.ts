@@ -1,9 +1,9 @@
 // The drafted block's figures for each panel, the checks a pattern cutter makes, and the piece list.
-import type { DartFigure, Piece } from '../../drafting';
-import { formatCm } from '../../drafting';
+import type { DartFigure, Piece } from '$lib/drafting';
+import { formatCm } from '$lib/drafting';
 import type { Frame } from './page-one';
 import { INK, PENCIL, heading, line, table, widthOf } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 import { allowanceWords, cutSize } from './words';
 
 type Doc = PDFKit.PDFDocument;

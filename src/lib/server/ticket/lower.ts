@@ -1,13 +1,13 @@
 // The bottom of the first page: the fabric with its estimated length and the lay drawing, sign-off boxes
 // for cut, sewn and finished, the sharp-tools caution, and the footer every page carries.
-import { formatCm } from '../../drafting';
-import { formatMetres } from '../../format';
-import { MARKER_PAD, markerMarks, markerScale } from '../../drafting/drawing/marker';
+import { formatCm } from '$lib/drafting';
+import { formatMetres } from '$lib/format';
+import { MARKER_PAD, markerMarks, markerScale } from '$lib/drafting/drawing/marker';
 import { drawMarks, pdfMeasure } from './draw-pdf';
-import type { Area } from '../../drafting/drawing/sheets';
+import type { Area } from '$lib/drafting/drawing/sheets';
 import type { Frame } from './page-one';
 import { INK, PENCIL, THREAD, heading, line, para, ptPerCm, rule } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 type Doc = PDFKit.PDFDocument;
 

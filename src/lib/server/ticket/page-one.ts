@@ -1,11 +1,11 @@
 // The top of the ticket's first page: order number and QR code, promised date, first name, stage, then
 // the measurements as given, the working values (quarters with ease) and the style with its options.
-import { formatCm } from '../../drafting';
-import { formatDate } from '../../format';
-import { STAGE_LABELS } from '../../orders/stages';
+import { formatCm } from '$lib/drafting';
+import { formatDate } from '$lib/format';
+import { STAGE_LABELS } from '$lib/orders/stages';
 import { drawQr } from './qr';
 import { INK, PENCIL, THREAD, heading, line, rule, table } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 import { adjustmentWords, halvesWords, kneeWords, optionRows, styleKindName } from './words';
 
 type Doc = PDFKit.PDFDocument;

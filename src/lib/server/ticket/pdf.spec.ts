@@ -4,9 +4,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, describe, expect, it } from 'vitest';
-import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '../../drafting';
+import { draftSkirt, formatCm, type Measurements, type SkirtChoiceInput } from '$lib/drafting';
 import { renderTickets } from './pdf';
-import { makeTicket, type TicketInput } from './ticket';
+import { makeTicket, type TicketInput } from '../outputs/ticket';
 import type { RemakeChanges } from '../fit/remake-changes';
 
 // Invented order data; the figures the ticket must print are the engine's own output for it, drafted

@@ -3,17 +3,17 @@
 // package and the QR code is drawn as vectors, so rendering needs no network.
 import PDFDocument from 'pdfkit';
 import { blockFigures, pieceList } from './figures';
-import type { Piece } from '../../drafting';
-import { DIM_ROOM, captionRoom } from '../../drafting/drawing/piece';
+import type { Piece } from '$lib/drafting';
+import { DIM_ROOM, captionRoom } from '$lib/drafting/drawing/piece';
 import { registerLora } from '../fonts/lora';
-import { GAP, placeOf, planPieces, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
-import { markerScale } from '../../drafting/drawing/marker';
+import { GAP, placeOf, planPieces, type Area, type PieceMap, type Placed } from '$lib/drafting/drawing/sheets';
+import { markerScale } from '$lib/drafting/drawing/marker';
 import { SIGN_OFF_HEIGHT, caution, fabric, footer, layDrawing, markerBox, signOff } from './lower';
 import { banners, facts, fitAdjustments, header, type Frame } from './page-one';
 import { piecesArea, piecesPage, ticketStyle } from './pieces-page';
 import { remakeChanges, remakeHeight, remakeMark } from './remake';
 import { MM, heading } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 export type Paper = 'A4' | 'Letter';
 

@@ -1,14 +1,14 @@
 // The pieces page: every piece drawn to one stated scale, a scale bar whose true length a cutter can
 // check with a rule (print scaling is the usual way a drawing stops being to scale), and a legend.
-import type { Piece } from '../../drafting';
-import { ruledBar } from '../../drafting/drawing/marker';
-import { pieceMarks, type PieceStyle } from '../../drafting/drawing/piece';
-import { legendMarks } from '../../drafting/drawing/symbols';
+import type { Piece } from '$lib/drafting';
+import { ruledBar } from '$lib/drafting/drawing/marker';
+import { pieceMarks, type PieceStyle } from '$lib/drafting/drawing/piece';
+import { legendMarks } from '$lib/drafting/drawing/symbols';
 import { drawMarks, pdfMeasure } from './draw-pdf';
-import { placeOf, type Area, type PieceMap, type Placed } from '../../drafting/drawing/sheets';
+import { placeOf, type Area, type PieceMap, type Placed } from '$lib/drafting/drawing/sheets';
 import type { Frame } from './page-one';
 import { MM, PENCIL, line, ptPerCm } from './text';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 type Doc = PDFKit.PDFDocument;
 

@@ -3,15 +3,15 @@
 // report the changes came from and why. Nothing is drawn for an order that is not a remake.
 // The pages and mails write "72 cm → 74 cm"; Lora has no arrow glyph in any of its subsets, so the
 // ticket says it in words: "first cut 72 cm, now 74 cm".
-import { formatCm } from '../../drafting';
-import { formatDate } from '../../format';
-import { FIELD_LABEL } from '../../fit/report';
+import { formatCm } from '$lib/drafting';
+import { formatDate } from '$lib/format';
+import { FIELD_LABEL } from '$lib/fit/report';
 import type { FitCorrection } from '../db/schema';
 import type { RemakeChanges } from '../fit/remake-changes';
 import type { Frame } from './page-one';
 import { THREAD, PENCIL, heading, line, widthOf } from './text';
 import { styleKindName } from './words';
-import type { Ticket } from './ticket';
+import type { Ticket } from '../outputs/ticket';
 
 type Doc = PDFKit.PDFDocument;
 const ROW = 11;

@@ -1,6 +1,6 @@
 // Units and text drawing for the cutting ticket. Every single line of text goes through
 // `line`, which sets it on its baseline in Lora, run by run (see fonts.ts), shrunk or cut to fit.
-import { PALETTE } from '../../drafting/drawing/model';
+import { PALETTE } from '$lib/drafting/drawing/model';
 import { runsOf, useFont, type Weight } from '../fonts/lora';
 
 /** The one palette (the drawing model's), by the names page layout uses. */
@@ -9,7 +9,7 @@ export const { ink: INK, chalk: CHALK, thread: THREAD, pencil: PENCIL, paper: PA
 /** PDF points in a millimetre: 72 points to the inch, 25.4 mm to the inch. */
 export const MM = 72 / 25.4;
 
-export { ptPerCm } from '../../drafting/drawing/model';
+export { ptPerCm } from '$lib/drafting/drawing/model';
 
 type Doc = PDFKit.PDFDocument;
 
@@ -27,20 +27,27 @@ export interface LineStyle {
 }
 
 // Measuring text shapes it with fontkit every time; a ticket measures the same labels many times
-// while it tries page layouts, so widths are remembered per document.
-const widths = new WeakMap<Doc, Map<string, number>>();
+// while it tries page layouts, and every document sets the same words, so widths are remembered for the
+// process, per face, at 1 pt (a width grows with the letter size in proportion). Started afresh past a size.
+const widths = new Map<string, number>();
+const MAX_WIDTHS = 20_000;
+
+/** Width at 1 pt of a run of text in one face. */
+function runWidth(doc: Doc, font: string, text: string): number {
+	const key = `${font}|${text}`;
+	const hit = widths.get(key);
+	if (hit !== undefined) return hit;
+	const w = doc.font(font).fontSize(1).widthOfString(text);
+	if (widths.size >= MAX_WIDTHS) widths.clear();
+	widths.set(key, w);
+	return w;
+}
 
 /** Width of a line of text at a size. */
 export function widthOf(doc: Doc, text: string, size: number, weight: Weight = 400): number {
-	let known = widths.get(doc);
-	if (!known) widths.set(doc, (known = new Map()));
-	const key = `${weight}|${size}|${text}`;
-	const hit = known.get(key);
-	if (hit !== undefined) return hit;
 	let w = 0;
-	for (const r of runsOf(text, weight)) w += doc.font(r.font).fontSize(size).widthOfString(r.text);
-	known.set(key, w);
-	return w;
+	for (const r of runsOf(text, weight)) w += runWidth(doc, r.font, r.text);
+	return w * size;
 }
 
 function fitted(doc: Doc, text: string, s: LineStyle): { text: string; size: number } {
@@ -66,9 +73,10 @@ export function line(doc: Doc, text: string, x: number, y: number, s: LineStyle)
 	doc.fillColor(s.color ?? INK);
 	let dx = start;
 	for (const r of runsOf(f.text, weight)) {
+		const w = runWidth(doc, r.font, r.text) * f.size;
 		doc.font(r.font).fontSize(f.size);
 		doc.text(r.text, x + dx, y, { lineBreak: false, baseline: 'alphabetic' });
-		dx += doc.widthOfString(r.text);
+		dx += w;
 	}
 	doc.restore();
 	return width;

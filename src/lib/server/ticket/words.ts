@@ -1,6 +1,6 @@
 // The ticket's words for the engine's values: options, edges, stages. Trade terms as the trade has them.
-import type { Draft, Edge, Piece, ResolvedChoice } from '../../drafting';
-import { STYLES, fitWords, formatCm } from '../../drafting';
+import type { Draft, Edge, Piece, ResolvedChoice } from '$lib/drafting';
+import { STYLES, fitWords, formatCm } from '$lib/drafting';
 
 export const styleKindName = (id: string) => STYLES.find((s) => s.id === id)?.name ?? id;
 

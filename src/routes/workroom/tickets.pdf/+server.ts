@@ -1,7 +1,7 @@
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
 import { failureJson } from '$lib/server/answer';
-import { parseIds, ticketsResponse } from '$lib/server/ticket/respond';
+import { parseIds, ticketsResponse } from '$lib/server/outputs/ticket-respond';
 import type { RequestHandler } from './$types';
 
 // Several orders' cutting tickets in one PDF: /workroom/tickets.pdf?ids=1,2,3, or ?ids=1&ids=2 as the

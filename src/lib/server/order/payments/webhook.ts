@@ -8,7 +8,7 @@ import { moveLocked, type Tx } from '../stage';
 import { orderSummary } from '../summary';
 import { formatMoney } from '$lib/format';
 import { remakePromise } from '$lib/fit/promise';
-import { shopSettingsOf } from '../../house/rules';
+import { shopSettingsOf } from '$lib/server/house/rules';
 import { STAGE_LABELS } from '$lib/orders/stages';
 
 const PROVIDER = { id: null, label: 'Payment provider' };

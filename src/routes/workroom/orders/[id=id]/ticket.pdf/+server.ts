@@ -1,6 +1,6 @@
 import { db } from '$lib/server/db';
 import { requireRole, STAFF } from '$lib/server/access';
-import { ticketsResponse } from '$lib/server/ticket/respond';
+import { ticketsResponse } from '$lib/server/outputs/ticket-respond';
 import type { RequestHandler } from './$types';
 
 // One order's cutting ticket: body measurements on paper, so for the workroom only.

@@ -2,7 +2,7 @@
 // and options, drafted with the house rules the order was placed under, so a reprint never changes.
 // Body measurements are personal data (GDPR): the ticket carries the shopper's first name only and
 // just the four measurements the workroom drafts from.
-import type { FigureSource } from '../../drafting/figures-source';
+import type { FigureSource } from '$lib/drafting/figures-source';
 import { firstName } from '$lib/orders/names';
 import {
 	draftSkirt,
@@ -13,9 +13,9 @@ import {
 	type HouseRulesInput,
 	DraftInputError,
 	type FitAdjustments
-} from '../../drafting';
+} from '$lib/drafting';
 import { draftInputOf, isErased, type StoredChoice, type StoredLine, type StoredMeasurements } from '../order/lines';
-import type { OrderStage } from '../../orders/stages';
+import type { OrderStage } from '$lib/orders/stages';
 import type { StoredCutterLay } from '../db/schema';
 import { clothOf, cutterLayFits } from '../order/cloth';
 import type { RemakeChanges } from '../fit/remake-changes';

@@ -1,7 +1,7 @@
 // The ticket draws the cutter's lay stored with the order when it was laid for the cloth as it is now,
 // and lays afresh (the quote's lay) when the cloth has changed since.
 import { describe, expect, it } from 'vitest';
-import { cutterLayInSlices, draftSkirt, estimateFabric } from '../../drafting';
+import { cutterLayInSlices, draftSkirt, estimateFabric } from '$lib/drafting';
 import type { StoredCutterLay } from '../db/schema';
 import { makeTicket, type TicketInput } from './ticket';
 

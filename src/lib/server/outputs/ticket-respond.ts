@@ -1,13 +1,13 @@
 // The HTTP answers of the ticket routes, shared by the single and the batch route: a PDF inline, or a
 // JSON message saying which order is missing or why it cannot be drafted again.
-import { DraftInputError } from '../../drafting';
+import { DraftInputError } from '$lib/drafting';
 import { failure, type Failure, type FailureStatus } from '$lib/failure';
 import { failureJson } from '../answer';
 import type { Db } from '../db/client';
 import { shopSettingsOf } from '../house/rules';
 import { siteOrigin } from '../origin';
-import { loadTickets } from './load';
-import { renderTickets } from './pdf';
+import { loadTickets } from './ticket-load';
+import { renderTickets } from '../ticket/pdf';
 
 /** The most orders one batch may print (a day's cutting, with room to spare). */
 export const MAX_BATCH = 50;
