@@ -113,7 +113,6 @@ async function main() {
 		() => draftBench('tests/bench/instances.ts', 1_200_000),
 		'instances'
 	);
-	if (chosen.has('lays') || chosen.has('instances')) printLays(instances, lays);
 
 	const pages = await measure('pages: JavaScript and CSS per route from the build output', async () => {
 		const p = await measurePages(env.QL_BUILD_DIR);
