@@ -258,8 +258,5 @@ export function waistWithCaps(panel: Pick<Panel, 'waistParts' | 'darts'>): Segme
 	return out;
 }
 
-/** Length of the waist seam with the darts closed (the parts between the darts, end to end). */
-export const closedWaistLength = (parts: Segment[][]) => parts.flat().reduce((s, x) => s + segmentLength(x), 0);
-
 /** Leg lengths of a dart (equal by construction; measured so the checks can say so). */
 export const dartLegs = (d: DartGeom) => [dist(d.top1, d.point), dist(d.top2, d.point)];

@@ -10,7 +10,6 @@ import {
 	line,
 	mul,
 	normalOf,
-	segmentLength,
 	sub,
 	unit,
 	type Point,
@@ -128,26 +127,6 @@ export function panelNotches(kind: 'front' | 'back', side: Segment[], hipAlongSi
 		out.push({ at: at(side, p.fromWaist), label }, { at: at(side, p.fromWaist + p.opening), label });
 	}
 	return out;
-}
-
-/** Length along a run of segments from its start to the point where it reaches height y (for the hip notch). */
-export function lengthToHeight(segs: Segment[], y: number): number {
-	let sum = 0;
-	for (const s of segs) {
-		const l = segmentLength(s);
-		if (Math.max(s.from.y, s.to.y) >= y - 1e-9) {
-			let lo = 0;
-			let hi = l;
-			for (let i = 0; i < 40; i++) {
-				const mid = (lo + hi) / 2;
-				if (alongPath([s], mid).point.y < y) lo = mid;
-				else hi = mid;
-			}
-			return sum + (lo + hi) / 2;
-		}
-		sum += l;
-	}
-	return sum;
 }
 
 /** How the back is cut: with a centre back seam (a pair) when the zip or a vent is there, else on the fold. */
