@@ -10,6 +10,7 @@ import { securityHeaders } from '$lib/server/hooks/headers';
 import { throttleCredentials } from '$lib/server/hooks/throttle';
 import { handleUnavailableError, unavailable } from '$lib/server/hooks/unavailable';
 import { currentUser } from '$lib/server/hooks/user';
+import { countRequests } from '$lib/server/hooks/busy';
 import { startOutboxWorker, stopOutboxWorker } from '$lib/server/mail';
 import { startJobWorker, stopJobWorker } from '$lib/server/outputs/worker';
 import { pool } from '$lib/server/db';
@@ -39,7 +40,7 @@ export const init: ServerInit = () => {
 	process.exit(1);
 };
 
-export const handle = sequence(unavailable, securityHeaders, canonicalHost, throttleCredentials, authHandle, currentUser, guard);
+export const handle = sequence(countRequests, unavailable, securityHeaders, canonicalHost, throttleCredentials, authHandle, currentUser, guard);
 
 export const handleError: HandleServerError = (input) => {
 	const dbDown = handleUnavailableError(input);

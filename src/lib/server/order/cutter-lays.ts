@@ -1,5 +1,5 @@
 // The cutter's lay of each paid order line, searched in the background (a few seconds each, in slices that
-// let requests in between) and stored with the line, so the ticket draws it without searching. A line is
+// wait while requests are answered) and stored with the line, so the ticket draws it without searching. A line is
 // laid again when its cloth's width, nap or shrinkage has changed since.
 import { asc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
@@ -8,8 +8,8 @@ import { fabrics, houseRules, orderLines, orders, type StoredCutterLay } from '.
 import { redraftLine } from '../outputs/ticket';
 import { cutterLayInSlices, DraftInputError } from '$lib/drafting';
 import { clothOf, cutterLayFits } from './cloth';
+import { yieldToRequests } from '../hooks/busy';
 
-const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 /** Lines that would not draft or lay: not tried again until the server restarts. */
 const refused = new Set<number>();
 
@@ -37,7 +37,8 @@ export async function layNextLine(conn: Db, seconds = 3): Promise<boolean> {
 	try {
 		const started = performance.now();
 		const draft = redraftLine({ rules: line.rules, line, fabric: line.fabric });
-		const lay = await cutterLayInSlices(draft, cloth, { seconds, slice: 0.1 }, pause);
+		// Between slices the search lets requests go first (hooks/busy.ts).
+		const lay = await cutterLayInSlices(draft, cloth, { seconds, slice: 0.1 }, () => yieldToRequests());
 		const stored: StoredCutterLay = {
 			length: lay.length,
 			need: lay.need,
