@@ -20,6 +20,7 @@ import { OutputProblem } from './problem';
 import { PRODUCERS } from './producers';
 import type { OutputFile } from './types';
 import { failure, type Failure } from '$lib/failure';
+import { yieldToRequests } from '../hooks/busy';
 
 /** The most orders one job may take (a day's cutting, with room to spare; as the ticket batch). */
 export const MAX_JOB_ORDERS = 50;
@@ -181,8 +182,8 @@ export async function runJob(db: Db, id: number, save: SaveZip, worker = WORKER_
 		done++;
 		const [res] = await db.update(outputJobs).set({ done, failures, heartbeatAt: new Date() }).where(mine);
 		if (res.affectedRows === 0) return; // taken back from this worker: another one finishes it
-		// Let the app answer requests between orders.
-		await new Promise((r) => setImmediate(r));
+		// Requests first between orders (hooks/busy.ts): a file job is background work.
+		await yieldToRequests();
 	}
 	if (!files) {
 		await db.update(outputJobs).set({ status: 'failed', finishedAt: new Date(), error: 'No file could be made for any of these orders; see each order below.' }).where(mine);
