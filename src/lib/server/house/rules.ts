@@ -32,7 +32,7 @@ export const rulesVersions = (db: Db, limit = 20) =>
 		.limit(limit);
 
 /** One version of the rules, as an order that was drafted with it needs them. */
-export async function rulesVersion(db: Db, id: number): Promise<HouseRules> {
+export async function rulesVersion(db: Pick<Db, 'select'>, id: number): Promise<HouseRules> {
 	let rules = parsedVersions.get(id);
 	if (!rules) {
 		const [row] = await db.select().from(houseRules).where(eq(houseRules.id, id));

@@ -51,12 +51,6 @@ export async function queueMail(db: Db, settings: MailSettings, message: MailMes
 }
 
 export async function deliverOne(db: Db, settings: MailSettings, id: number) {
-	// The skirt drawings the HTML names go with it as inline images (outputs/garment.ts says why). They
-	// are made before the row is locked: made inside, each sending held its connection and asked the pool
-	// for another, and as many mails at once as the pool has connections waited for ever.
-	const [queued] = await db.select({ html: outbox.html }).from(outbox).where(and(eq(outbox.id, id), isNull(outbox.sentAt)));
-	if (!queued) return false;
-	const attachments = await mailImages(db, queued.html ?? '').catch(() => []);
 	return db.transaction(async (tx) => {
 		// SKIP LOCKED: two app servers draining the outbox never send the same message twice.
 		const [msg] = await tx
@@ -66,6 +60,11 @@ export async function deliverOne(db: Db, settings: MailSettings, id: number) {
 			.for('update', { skipLocked: true });
 		if (!msg) return false;
 		try {
+			// The skirt drawings the HTML names go with it as inline images (outputs/garment.ts says why),
+			// read through this transaction's own connection: through the pool, each sending held one
+			// connection and asked for another, and as many mails at once as the pool has connections
+			// waited for ever.
+			const attachments = await mailImages(tx, msg.html).catch(() => []);
 			await createTransport(settings).sendMail({
 				from: settings.from,
 				to: msg.toAddress,

@@ -36,7 +36,7 @@ export async function garmentPng(draft: Draft, cloth: GarmentCloth, px = 560): P
 }
 
 /** Re-drafts stored order lines; a line that no longer drafts (rules changed past it) has no drawing. */
-async function draftsOfLines(db: Db, where: { orderId: number } | { orderNumber: string } | { lineIds: number[] }) {
+async function draftsOfLines(db: Pick<Db, 'select'>, where: { orderId: number } | { orderNumber: string } | { lineIds: number[] }) {
 	const rows = await db
 		.select({
 			id: orderLines.id,
@@ -81,7 +81,7 @@ export async function orderLineDrawings(db: Db, order: number | string): Promise
 export const lineCid = (lineId: number) => `skirt-${lineId}@quarterline`;
 
 /** The inline images a message's HTML names (cid:skirt-N@quarterline), rendered from the order lines. */
-export async function mailImages(db: Db, html: string) {
+export async function mailImages(db: Pick<Db, 'select'>, html: string) {
 	const ids = [...new Set([...html.matchAll(/cid:skirt-(\d+)@quarterline/g)].map((m) => Number(m[1])))];
 	if (!ids.length) return [];
 	const lines = await draftsOfLines(db, { lineIds: ids });
