@@ -1,5 +1,6 @@
 import { error, redirect } from '@sveltejs/kit';
 import type { Role } from './db/schema';
+import { signInReturningTo } from './origin';
 
 // Who may open what, decided from the route SvelteKit matched (event.route.id: the folder path under
 // src/routes), never from the URL text. The router decodes and normalises the path before it matches,
@@ -63,7 +64,7 @@ export function requireRole(event: Event, roles: readonly Role[]) {
 	const user = event.locals.user;
 	if (!user) {
 		if (isApi(event.route.id)) error(401, 'Sign in first.');
-		redirect(303, `/signin?next=${encodeURIComponent(event.url.pathname + event.url.search)}`);
+		redirect(303, signInReturningTo(event.url));
 	}
 	if (!roles.includes(user.role)) {
 		const area = areaFor(event.route.id);

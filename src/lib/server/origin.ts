@@ -43,3 +43,6 @@ export function safeNext(next: string | null | undefined, fallback = '/'): strin
 	// "/.//evil.example" parses to the path "//evil.example", which a browser would read as a host.
 	return path.startsWith('/') && !path.startsWith('//') ? path : fallback;
 }
+
+/** The sign-in page, asked to come back to where the visitor was (the page she asked for, with its query). */
+export const signInReturningTo = (url: URL): string => `/signin?next=${encodeURIComponent(`${url.pathname}${url.search}`)}`;

@@ -3,28 +3,12 @@
 // the words read back from the file by pdf-parse, an independent PDF reader.
 import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
-import { resolveRules } from '$lib/drafting';
-import type { StoredChoice } from '../order/lines';
-import { makeTicket } from './ticket';
 import { OutputError } from './errors';
 import { K } from './doc';
 import { A0, a0Plan, renderSheet } from './sheet';
-import { sourceOf } from './source';
+import { specOrder } from './spec-order';
 
-function sourceFor(number: string, measurements: { waist: number; hip: number; length: number; waistToHip: number }, options: Omit<StoredChoice, 'stretch'>) {
-	const ticket = makeTicket({
-		orderId: 1,
-		number,
-		shopperName: 'Ada Vale',
-		status: 'cutting',
-		promisedDate: '2026-12-20',
-		houseRulesId: 1,
-		rules: resolveRules({}),
-		line: { id: 1, index: 1, count: 1, styleName: options.style, measurements, options: { ...options, stretch: false } },
-		fabric: { name: 'Wool twill', colour: 'Navy', fibreContent: '100 % wool', widthCm: 150, nap: false, stretch: false, shrinkagePct: 0 }
-	});
-	return sourceOf([ticket]);
-}
+const sourceFor = specOrder;
 
 async function wordsByPage(bytes: Uint8Array): Promise<string[]> {
 	const parser = new PDFParse({ data: new Uint8Array(bytes) });

@@ -3,47 +3,14 @@
 // broken if need be, so none is cut in two by a page edge. Widths measured in the embedded Lora, as the
 // PDF sets them. Three seeded skirts on both papers.
 import { describe, expect, it } from 'vitest';
-import { resolveRules } from '$lib/drafting';
 import type { Mark } from '$lib/drafting/drawing/model';
 import { pdfMeasure } from '../ticket/draw-pdf';
 import { newDoc } from './doc';
-import { sourceOf } from './source';
-import { makeTicket } from './ticket';
 import { tilePlanFor, tiledMarks } from './tiled';
+import { specOrder } from './spec-order';
 
-const sourceFor = (
-	number: string,
-	measurements: { waist: number; hip: number; length: number; waistToHip: number },
-	options: { style: 'straight' | 'gored' | 'full-circle'; lining?: boolean; pockets?: boolean }
-) =>
-	sourceOf([
-		makeTicket({
-			orderId: 1,
-			number,
-			shopperName: 'Ada Vale',
-			status: 'cutting',
-			promisedDate: '2026-12-20',
-			houseRulesId: 1,
-			rules: resolveRules({}),
-			line: {
-				id: 1,
-				index: 1,
-				count: 1,
-				styleName: options.style,
-				measurements,
-				options: { ...options, stretch: false }
-			},
-			fabric: {
-				name: 'Viscose crepe',
-				colour: 'Ink',
-				fibreContent: '100 % viscose',
-				widthCm: 140,
-				nap: false,
-				stretch: false,
-				shrinkagePct: 0
-			}
-		})
-	]);
+const sourceFor = (number: string, measurements: { waist: number; hip: number; length: number; waistToHip: number }, options: { style: 'straight' | 'gored' | 'full-circle'; lining?: boolean; pockets?: boolean }) =>
+	specOrder(number, measurements, options, { name: 'Viscose crepe', colour: 'Ink', fibreContent: '100 % viscose', widthCm: 140 });
 // The seed's full circle (QL-1007), lined straight skirt (QL-1008) and lined six gores with pockets (QL-1005).
 const SKIRTS = [
 	sourceFor('QL-9007', { waist: 64, hip: 88, length: 55, waistToHip: 18 }, { style: 'full-circle' }),
